@@ -1,0 +1,101 @@
+#include "app/options.hpp"
+
+#include <sstream>
+#include <stdexcept>
+
+namespace sweepcert {
+
+const std::vector<CommandSpec>& command_table() {
+  static const std::vector<CommandSpec> table = {
+      {"prove", "sweepcert prove INPUT -o CERT [options]",
+       "Decide whether a separating sheet proves that no evasion path exists, and write a\n"
+       "  certificate either way: a sheet (claim no-evasion) or a cocycle showing no sheet exists\n"
+       "  (claim no-sheet). INPUT is a positional scenario (sweepcert-scenario-1) or a contact\n"
+       "  log (sweepcert-contacts-1); see schema/README.md."},
+      {"contacts", "sweepcert contacts SCENARIO --every DT -o LOG",
+       "Write the contact log that these sensors would record: frames at START + k*DT, at every\n"
+       "  waypoint time inside the horizon and at END; pairs and triples decided exactly."},
+  };
+  return table;
+}
+
+const std::vector<OptionSpec>& option_table() {
+  static const std::vector<OptionSpec> table = {
+      {"-o", "FILE", nullptr, "prove contacts", "where to write the certificate / log (required)"},
+      {"--method", "auto|sheet", "auto", "prove",
+       "proof method; 'auto' uses the separating sheet (the only method in this version)"},
+      {"--ring", "z|z2", "z", "prove",
+       "coefficients of the sheet or cocycle: integers (z) or integers mod 2 (z2, faster)"},
+      {"--max-frames", "N", "20000", "prove",
+       "positional input: at most this many frames when refining time"},
+      {"--every", "DT", nullptr, "contacts", "spacing of regular frames (an exact number > 0)"},
+      {"--quiet", nullptr, nullptr, "prove contacts", "print nothing but errors"},
+  };
+  return table;
+}
+
+namespace {
+bool applies(const OptionSpec& o, const std::string& cmd) {
+  std::istringstream in(o.commands);
+  std::string c;
+  while (in >> c)
+    if (c == cmd) return true;
+  return false;
+}
+}  // namespace
+
+ParsedArgs parse_args(int argc, char** argv) {
+  ParsedArgs out;
+  if (argc < 2) throw UsageError("no command given");
+  out.command = argv[1];
+  bool known = false;
+  for (const auto& c : command_table()) known = known || out.command == c.name;
+  if (!known) throw UsageError("unknown command '" + out.command + "'");
+  for (int i = 2; i < argc; ++i) {
+    std::string arg = argv[i];
+    if (arg.size() > 1 && arg[0] == '-') {
+      const OptionSpec* spec = nullptr;
+      for (const auto& o : option_table())
+        if (arg == o.name && applies(o, out.command)) spec = &o;
+      if (!spec) throw UsageError("unknown option '" + arg + "' for '" + out.command + "'");
+      if (spec->value) {
+        if (i + 1 >= argc) throw UsageError("option " + arg + " needs a value (" + spec->value + ")");
+        out.options[arg] = argv[++i];
+      } else {
+        out.options[arg] = "1";
+      }
+    } else {
+      out.positional.push_back(arg);
+    }
+  }
+  for (const auto& o : option_table())
+    if (o.fallback && applies(o, out.command) && !out.has(o.name)) out.options[o.name] = o.fallback;
+  return out;
+}
+
+std::string help_text(const std::string& command) {
+  std::ostringstream h;
+  if (command.empty()) {
+    h << "sweepcert - certify that a sweep by moving sensors left no evasion path\n\n"
+         "Commands:\n";
+    for (const auto& c : command_table()) h << "  " << c.usage << "\n  " << c.summary << "\n\n";
+  } else {
+    for (const auto& c : command_table())
+      if (command == c.name) h << "Usage: " << c.usage << "\n\n  " << c.summary << "\n\n";
+  }
+  h << "Options:\n";
+  for (const auto& o : option_table()) {
+    if (!command.empty() && !applies(o, command)) continue;
+    std::string left = std::string("  ") + o.name + (o.value ? std::string(" ") + o.value : "");
+    h << left << std::string(left.size() < 24 ? 24 - left.size() : 1, ' ') << o.help;
+    if (o.fallback) h << " (default " << o.fallback << ")";
+    h << "\n";
+  }
+  h << "\nExit codes: 0 certificate (or log) written; 2 invalid input or usage, nothing written;\n"
+       "4 internal failure, nothing written.\n"
+       "A certificate covers the model as given (disks, fence, tracks or log) and nothing else:\n"
+       "not sensor faults, occlusion or wrong logs. Follow site-specific security practice.\n";
+  return h.str();
+}
+
+}  // namespace sweepcert
