@@ -37,7 +37,7 @@ std::optional<Rational> parse_exact(std::string_view text, std::string* why) {
     std::string_view num = body.substr(0, slash), den = body.substr(slash + 1);
     if (!all_digits(num) || !all_digits(den))
       return fail("not a fraction of two whole numbers (expected e.g. \"7/3\")");
-    mpz_class n{std::string(num)}, d{std::string(den)};
+    mpz_class n(std::string(num), 10), d(std::string(den), 10);
     if (d == 0) return fail("zero denominator");
     Rational q(n, d);
     q.canonicalize();
@@ -68,7 +68,7 @@ std::optional<Rational> parse_exact(std::string_view text, std::string* why) {
     if (exponent > kMaxExponent) return fail("exponent out of range (at most 1000)");
     if (eneg) exponent = -exponent;
   }
-  mpz_class digits{std::string(ipart) + std::string(fpart)};
+  mpz_class digits(std::string(ipart) + std::string(fpart), 10);
   exponent -= static_cast<long>(fpart.size());
   Rational q(digits);
   if (exponent > 0) q *= pow10(exponent);

@@ -51,6 +51,17 @@ std::vector<Integer> lift(const std::vector<std::uint64_t>& v, Integer& scale) {
   }
 }
 
+// A prism over a fence edge has its whole boundary in the fence cylinder with zero net winding
+// (V(b) - V(a) - E_{k+1} + E_k), so dropping it from a sheet leaves a sheet. We drop them so
+// that every cell of a written sheet is needed.
+bool is_fence_prism(const Stack& s, const TwoCell& c) {
+  if (c.kind != TwoCell::Prism) return false;
+  const Pair& p = s.frames[c.frame].edges[c.index];
+  std::size_t m = s.fence_count;
+  if (p.second >= m) return false;
+  return p.second == p.first + 1 || (p.first == 0 && p.second == m - 1);
+}
+
 template <class F>
 typename F::Entry entry(std::uint32_t row, int sign) {
   return F::make(row, F::from_int(sign));
@@ -96,7 +107,7 @@ SheetOutcome solve_in(const Stack& stack, const Progress& progress) {
     out.sheet = true;
     out.winding = scale;
     for (std::size_t j = 0; j < done; ++j)
-      if (coef[j] != 0) out.cells.push_back({columns[j], coef[j]});
+      if (coef[j] != 0 && !is_fence_prism(stack, columns[j])) out.cells.push_back({columns[j], coef[j]});
     return out;
   }
 
@@ -160,10 +171,25 @@ void verify(const Stack& stack, Ring ring, const SheetOutcome& o) {
       int nb = layout.boundary(cell.cell, b);
       for (int i = 0; i < nb; ++i) bd[b[i].row] += b[i].sign * cell.coef;
     }
-    for (const auto& sr : layout.fence_loop()) bd[sr.row] -= sr.sign * o.winding;
-    for (auto& v : bd)
-      if (reduce(v) != 0) throw std::runtime_error("internal check failed: sheet boundary is not m times the fence loop");
-    if (reduce(o.winding) == 0) throw std::runtime_error("internal check failed: zero winding");
+    // Boundary only on the fence cylinder, winding m along every fence edge (schema §4.3).
+    const std::size_t m = stack.fence_count;
+    std::vector<Integer> winding(m, 0);
+    for (std::uint32_t r = 0; r < bd.size(); ++r) {
+      if (reduce(bd[r]) == 0) continue;
+      OneCell c = layout.cell_of_row(r);
+      if (c.kind == OneCell::Vertical) {
+        if (c.index >= m) throw std::runtime_error("internal check failed: sheet boundary off the fence");
+        continue;
+      }
+      const Pair& p = stack.frames[c.frame].edges[c.index];
+      if (p.second >= m) throw std::runtime_error("internal check failed: sheet boundary off the fence");
+      if (p.second == p.first + 1) winding[p.first] += bd[r];
+      else if (p.first == 0 && p.second == m - 1) winding[m - 1] -= bd[r];
+      else throw std::runtime_error("internal check failed: sheet boundary on a non-fence edge");
+    }
+    for (const auto& w : winding)
+      if (reduce(w - o.winding) != 0 || reduce(w) == 0)
+        throw std::runtime_error("internal check failed: sheet does not wind around the fence");
     return;
   }
   std::vector<Integer> phi(layout.rows(), 0);
