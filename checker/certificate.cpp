@@ -1,0 +1,172 @@
+#include "certificate.hpp"
+
+#include <algorithm>
+
+#include "errors.hpp"
+
+namespace sweepcheck {
+
+using json::Kind;
+using json::Ref;
+
+std::string Where::str() const {
+  std::string s = std::string(base) + "/" + std::to_string(row);
+  if (col >= 0) s += "/" + std::to_string(col);
+  return s;
+}
+
+std::string ring_name(Ring r) { return r == Ring::Z ? "z" : "z2"; }
+
+Value Values::read(Ref v, const Where& where, Ring ring, const char* rule) {
+  if (!v.is(Kind::String)) throw Rejected(where.str(), "", std::string("expected a decimal integer string (§1.2)"));
+  std::string_view text = v.text();
+  Value out;
+  if (parse_small_integer(text, out.small)) {
+    // fast path
+  } else {
+    Int n;
+    std::string why = parse_integer(text, n);
+    if (!why.empty()) throw Rejected(where.str(), "", why + " (§1.2)");
+    out.big = static_cast<std::int32_t>(bigs_.size());
+    bigs_.push_back(std::move(n));
+  }
+  if (out.big < 0 && out.small == 0) throw Rejected(where.str(), "", std::string("zero value (") + rule + ")");
+  if (ring == Ring::Z2 && text != "1")
+    throw Rejected(where.str(), "", std::string("over z2 every value must be \"1\" (") + rule + ")");
+  return out;
+}
+
+std::uint32_t read_index(Ref v, const Where& where, std::size_t limit, const char* what) {
+  if (v.is(Kind::Unsigned)) {
+    std::uint64_t k = v.unsigned_value();
+    if (k >= limit)
+      throw Rejected(where.str(), "", std::string(what) + " index " + std::to_string(k) + " out of range (must be < " +
+                                          std::to_string(limit) + ", §4)");
+    return static_cast<std::uint32_t>(k);
+  }
+  if (v.is(Kind::Signed)) throw Rejected(where.str(), "", std::string(what) + " index must be non-negative (§1.2)");
+  if (v.is(Kind::Float)) {
+    std::string_view t = v.text();
+    if (t.find_first_of(".eE") != std::string_view::npos)
+      throw Rejected(where.str(), "", std::string(what) + " index must be a JSON integer without fraction or exponent (§1.2)");
+    throw Rejected(where.str(), "", std::string(what) + " index out of range (§4)");
+  }
+  throw Rejected(where.str(), "", std::string(what) + " index must be a JSON integer, found " + json::kind_name(v.kind()) + " (§1.2)");
+}
+
+std::uint32_t read_sensor(Ref v, const Where& where, const Input& in) {
+  if (!v.is(Kind::String) || v.text().empty() || v.text().size() > 64)
+    throw Rejected(where.str(), "", "a sensor id must be a string of 1 to 64 bytes (§1.3)");
+  std::int64_t id = in.find(v.text());
+  if (id < 0) throw Rejected(where.str(), "sensor \"" + std::string(v.text()) + "\"", "unknown sensor id (not in INPUT, rule 1)");
+  return static_cast<std::uint32_t>(id);
+}
+
+void expect_row(Ref v, const Where& where, std::size_t length, const char* shape) {
+  if (!v.is(Kind::Array) || v.size() != length)
+    throw Rejected(where.str(), "", std::string("a row must be an array ") + shape + " of " + std::to_string(length) + " values");
+}
+
+namespace {
+
+// Checks `value` of `key` is one of `allowed`; returns it.
+std::string one_of(const Members& m, std::string_view key, std::initializer_list<std::string_view> allowed) {
+  std::string_view s = get_string(m.need(key), m.at(key));
+  if (std::find(allowed.begin(), allowed.end(), s) == allowed.end())
+    throw Rejected(m.at(key), "", "unsupported value \"" + std::string(s) + "\" (§4.1)");
+  return std::string(s);
+}
+
+bool is_lower_hex(std::string_view s) {
+  return s.size() == 64 && std::all_of(s.begin(), s.end(), [](char c) { return (c >= '0' && c <= '9') || (c >= 'a' && c <= 'f'); });
+}
+
+// §4.2.
+void check_frames(const Certificate& cert, const Input& in, std::size_t& log_start) {
+  const std::vector<Rat>& f = cert.frames;
+  if (in.kind == InputKind::Scenario) {
+    for (std::size_t k = 0; k < f.size(); ++k)
+      if (f[k] < in.horizon_start || f[k] > in.horizon_end)
+        throw Rejected(at("/frames", k), "t=" + to_text(f[k]), "frame outside the horizon [" + to_text(in.horizon_start) + ", " +
+                                                                 to_text(in.horizon_end) + "] (§4.2)");
+    for (std::size_t v = 0; v < in.sensors.size(); ++v) {
+      if (in.is_fence[v]) continue;
+      for (const Rat& t : in.sensors[v].times)
+        if (f.front() < t && t < f.back() && !std::binary_search(f.begin(), f.end(), t))
+          throw Rejected("/frames", "sensor \"" + in.names[v] + "\" waypoint t=" + to_text(t),
+                         "waypoint time strictly between the first and last frame is not a frame (§4.2)");
+    }
+    return;
+  }
+  auto it = std::lower_bound(in.times.begin(), in.times.end(), f.front());
+  if (it == in.times.end() || *it != f.front())
+    throw Rejected("/frames/0", "t=" + to_text(f.front()), "not the time of any frame of the contact log (§4.2)");
+  log_start = static_cast<std::size_t>(it - in.times.begin());
+  for (std::size_t k = 1; k < f.size(); ++k) {
+    if (log_start + k >= in.times.size())
+      throw Rejected(at("/frames", k), "t=" + to_text(f[k]), "runs past the last frame of the contact log (§4.2)");
+    if (f[k] != in.times[log_start + k])
+      throw Rejected(at("/frames", k), "t=" + to_text(f[k]),
+                     "must equal the time of log frame " + std::to_string(log_start + k) + ", t=" +
+                         to_text(in.times[log_start + k]) + ": frames must be a contiguous run of the log's frames (§4.2)");
+  }
+}
+
+}  // namespace
+
+Certificate read_header(Ref root, const Input& in, const std::string& input_sha256, std::ostream& out) {
+  try {
+    Certificate cert{Members(root, "", {"format", "claim", "method", "input_sha256", "input_format", "ring", "frames",
+                                        "notes", "winding", "triangles", "prisms", "fence_value", "edges", "verticals"}),
+                     "", "", Ring::Z, {}, 0};
+    const Members& m = cert.members;
+    one_of(m, "format", {"sweepcert-certificate-1"});
+    cert.claim = one_of(m, "claim", {"no-evasion", "no-sheet", "evasion"});
+    cert.method = one_of(m, "method", {"sheet", "cocycle", "chambers", "route"});
+    if (cert.claim == "evasion" || cert.method == "chambers" || cert.method == "route")
+      throw Rejected(cert.claim == "evasion" ? "/claim" : "/method", "",
+                     "reserved for a later version of the format; this checker does not accept it (§4.1)");
+    if ((cert.claim == "no-evasion") != (cert.method == "sheet"))
+      throw Rejected("/method", "", "method \"" + cert.method + "\" does not go with claim \"" + cert.claim +
+                                        "\" (sheet proves no-evasion, cocycle proves no-sheet, §4.1)");
+    const bool sheet = cert.method == "sheet";
+    for (std::string_view key : {"winding", "triangles", "prisms", "fence_value", "edges", "verticals"}) {
+      bool own = (key == "winding" || key == "triangles" || key == "prisms") == sheet;
+      if (own) m.need(key);
+      else if (m.get(key)) throw Rejected(m.at(key), "", "key not allowed with method \"" + cert.method + "\" (§4.3, §4.4)");
+    }
+    std::string_view hash = get_string(m.need("input_sha256"), "/input_sha256");
+    if (!is_lower_hex(hash)) throw Rejected("/input_sha256", "", "must be 64 lowercase hex digits (§4.1)");
+    if (hash != input_sha256)
+      throw Rejected("/input_sha256", "", "does not match the SHA-256 of INPUT, " + input_sha256 +
+                                              ": the certificate is for another input (§4.1)");
+    std::string_view format = get_string(m.need("input_format"), "/input_format");
+    if (format != in.format)
+      throw Rejected("/input_format", "", "is \"" + std::string(format) + "\" but INPUT is \"" + in.format + "\" (§4.1)");
+    cert.ring = one_of(m, "ring", {"z", "z2"}) == "z" ? Ring::Z : Ring::Z2;
+    Ref frames = m.need("frames");
+    expect_array(frames, "/frames", 1);
+    for (std::size_t k = 0; k < frames.size(); ++k) {
+      Rat t = get_rational(frames[k], at("/frames", k));
+      if (!cert.frames.empty() && !(cert.frames.back() < t))
+        throw Rejected(at("/frames", k), "t=" + to_text(t), "frames must increase strictly (§4.1)");
+      cert.frames.push_back(std::move(t));
+    }
+    if (frames.size() > 0xFFFFFFF0u) throw Rejected("/frames", "", "too many frames");
+    if (auto notes = m.get("notes")) {
+      std::string dup = json::find_duplicate_key(*notes, "/notes");
+      if (!dup.empty()) throw Rejected(dup, "", "duplicated key (§1.4)");
+    }
+    check_frames(cert, in, cert.log_start);
+    out << "certificate: claim " << cert.claim << " by " << cert.method << " over " << ring_name(cert.ring) << ", "
+        << cert.frames.size() << " frames, t=" << to_text(cert.frames.front()) << ".." << to_text(cert.frames.back());
+    if (in.kind == InputKind::ContactLog)
+      out << " (log frames " << cert.log_start << ".." << cert.log_start + cert.frames.size() - 1 << ")";
+    out << "; hash and input format match; frames obey §4.2\n";
+    return cert;
+  } catch (const FieldError& e) {
+    throw Rejected(e.pointer, "", e.message);
+  }
+}
+
+}  // namespace sweepcheck

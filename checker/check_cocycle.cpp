@@ -1,0 +1,156 @@
+// Cocycle certificates (schema/README.md §4.4): a 1-cochain phi with delta(phi) = 0 on every
+// 2-cell of the stack and phi(L_0) != 0, proving that no sheet exists on these frames.
+#include <boost/multiprecision/cpp_int.hpp>
+
+#include "certificate.hpp"
+#include "errors.hpp"
+
+namespace sweepcheck {
+namespace {
+
+using json::Ref;
+
+struct Entry {
+  int sign;  // row orientation = sign * canonical orientation
+  Value value;
+};
+
+struct Cochain {
+  std::vector<Entry> edge_rows, vertical_rows;
+  FlatMap<std::uint32_t> edges;      // pack(pair id, k) -> edge row
+  FlatMap<std::uint32_t> verticals;  // pack(vertex, k) -> vertical row
+};
+
+// phi on canonical cells, and the row defining it (rows are ordered edges first, then
+// verticals; ~0 when phi is 0 there).
+template <class V>
+struct Phi {
+  const Cochain& c;
+  const Values& values;
+  std::uint64_t first_row = ~std::uint64_t(0);
+  V at(const FlatMap<std::uint32_t>& map, const std::vector<Entry>& rows, std::uint64_t key, std::uint64_t offset) {
+    const std::uint32_t* row = map.find(key);
+    if (!row) return V(0);
+    first_row = std::min(first_row, offset + *row);
+    const Entry& e = rows[*row];
+    V x = values.get<V>(e.value);
+    return e.sign < 0 ? V(-x) : x;
+  }
+  V edge(std::uint64_t key) { return at(c.edges, c.edge_rows, key, 0); }
+  V vertical(std::uint64_t key) { return at(c.verticals, c.vertical_rows, key, std::uint64_t(1) << 40); }
+};
+
+std::string row_pointer(std::uint64_t row) {
+  if (row >> 40) return "/verticals/" + std::to_string(row & ((std::uint64_t(1) << 40) - 1));
+  return "/edges/" + std::to_string(row);
+}
+
+template <class V>
+bool nonzero(const V& x, Ring ring) { return ring == Ring::Z ? x != 0 : (x % 2) != 0; }
+
+// Rules 2 and 3 with values of type V (checked 128-bit, or Int when a value needs more).
+template <class V>
+std::string evaluate(const Cochain& c, const Values& values, Stack& stack, Ring ring, const Int& fence_value,
+                     std::ostream& out) {
+  std::size_t triangles = 0, prisms = 0;
+  stack.for_each_two_cell([&](const TwoCell& cell) {
+    Phi<V> phi{c, values};
+    const std::uint32_t a = cell.v[0], b = cell.v[1], k = cell.k;
+    V d;
+    if (cell.prism) {  // phi(V(b,k)) - phi(V(a,k)) - phi(E(a,b,k+1)) + phi(E(a,b,k))
+      const std::uint32_t ab = stack.pair_id(a, b);
+      d = phi.vertical(pack(b, k)) - phi.vertical(pack(a, k)) - phi.edge(pack(ab, k + 1)) + phi.edge(pack(ab, k));
+      ++prisms;
+    } else {  // phi(E(b,c)) - phi(E(a,c)) + phi(E(a,b))
+      const std::uint32_t cc = cell.v[2];
+      d = phi.edge(pack(stack.pair_id(b, cc), k)) - phi.edge(pack(stack.pair_id(a, cc), k)) +
+          phi.edge(pack(stack.pair_id(a, b), k));
+      ++triangles;
+    }
+    if (nonzero(d, ring))  // a nonzero sum needs a nonzero phi, so first_row names a row
+      throw Rejected(row_pointer(phi.first_row), stack.cell_text(cell),
+                     "phi(boundary) = " + d.str() + (ring == Ring::Z2 ? " (odd)" : "") +
+                         ", but a cocycle must vanish on every 2-cell (rule 4.4.2; the row named is one on its boundary)");
+    return true;
+  });
+  out << "coboundary: phi vanishes on all " << triangles << " triangles and " << prisms
+      << " prisms of the stack, enumerated from INPUT (rule 2)\n";
+  Phi<V> phi{c, values};
+  V loop(0);
+  for (std::size_t i = 0; i < stack.fence_size(); ++i) {
+    V x = phi.edge(pack(stack.fence_pair(i), 0));
+    loop += stack.fence_sign(i) < 0 ? V(-x) : x;
+  }
+  bool ok = ring == Ring::Z ? Int(loop) == fence_value : nonzero(loop, ring);
+  if (!ok)
+    throw Rejected("/fence_value", "fence loop L_0 at " + stack.frame_text(0),
+                   "phi(L_0) = " + loop.str() + " but fence_value is " + fence_value.str() +
+                       (ring == Ring::Z2 ? " (mod 2)" : "") + " (rule 4.4.3)");
+  out << "fence loop: phi(L_0) = " << fence_value << (ring == Ring::Z2 ? " (mod 2)" : "") << " != 0 (rule 3)\n";
+  return "no sheet exists over " + ring_name(ring) + " on these " + std::to_string(stack.frame_count()) +
+         " frames (t=" + to_text(stack.time(0)) + ".." + to_text(stack.time(stack.frame_count() - 1)) + ")";
+}
+
+}  // namespace
+
+std::string check_cocycle(const Certificate& cert, Stack& stack, std::ostream& out) {
+  const Input& in = stack.input();
+  const Members& m = cert.members;
+  const Ring ring = cert.ring;
+  const std::uint32_t n = static_cast<std::uint32_t>(stack.frame_count() - 1);
+  Int fence_value;
+  try {
+    fence_value = get_integer(m.need("fence_value"), "/fence_value");
+  } catch (const FieldError& e) {
+    throw Rejected(e.pointer, "", e.message);
+  }
+  if (ring == Ring::Z && fence_value == 0) throw Rejected("/fence_value", "", "must be nonzero over z (§4.4)");
+  if (ring == Ring::Z2 && fence_value != 1) throw Rejected("/fence_value", "", "must be \"1\" over z2 (§4.4)");
+
+  Values values;
+  Cochain c;
+  Ref edges = m.need("edges");
+  if (!edges.is(json::Kind::Array)) throw Rejected("/edges", "", "expected an array (§4.4)");
+  for (std::size_t i = 0; i < edges.size(); ++i) {
+    const Where w{"/edges", i};
+    Ref row = edges[i];
+    expect_row(row, w, 4, "[k, a, b, value]");
+    const std::uint32_t k = read_index(row[0], w.at(0), n + 1, "frame");
+    std::uint32_t v[2] = {read_sensor(row[1], w.at(1), in), read_sensor(row[2], w.at(2), in)};
+    if (v[0] == v[1]) throw Rejected(w.at(2).str(), "sensor \"" + stack.name(v[0]) + "\"", "repeated in one cell (rule 4.4.1)");
+    const std::string item = "edge [" + stack.name(v[0]) + "," + stack.name(v[1]) + "] at " + stack.frame_text(k);
+    Entry e{canonical_order(v, 2), values.read(row[3], w.at(3), ring, "rule 4.4.1")};
+    if (!stack.edge_present(v[0], v[1], k)) throw Rejected(w.str(), item, "the edge is not present at this frame (rule 4.4.1)");
+    auto [first, fresh] = c.edges.insert(pack(stack.pair_id(v[0], v[1]), k), static_cast<std::uint32_t>(i));
+    if (!fresh) throw Rejected(w.str(), item, "the cell appears twice (also /edges/" + std::to_string(*first) + ", rule 4.4.1)");
+    c.edge_rows.push_back(e);
+  }
+  Ref verticals = m.need("verticals");
+  if (!verticals.is(json::Kind::Array)) throw Rejected("/verticals", "", "expected an array (§4.4)");
+  for (std::size_t i = 0; i < verticals.size(); ++i) {
+    const Where w{"/verticals", i};
+    Ref row = verticals[i];
+    expect_row(row, w, 3, "[k, v, value]");
+    const std::uint32_t k = read_index(row[0], w.at(0), n, "slab");
+    const std::uint32_t v = read_sensor(row[1], w.at(1), in);
+    Entry e{1, values.read(row[2], w.at(2), ring, "rule 4.4.1")};
+    auto [first, fresh] = c.verticals.insert(pack(v, k), static_cast<std::uint32_t>(i));
+    if (!fresh)
+      throw Rejected(w.str(), "vertical V(" + stack.name(v) + ") over " + stack.slab_text(k),
+                     "the cell appears twice (also /verticals/" + std::to_string(*first) + ", rule 4.4.1)");
+    c.vertical_rows.push_back(e);
+  }
+  out << "cochain: " << edges.size() << " edge values and " << verticals.size()
+      << " vertical values, every cell present, none twice, no zero value (rule 1)\n";
+
+  if (!values.any_big()) {
+    try {
+      return evaluate<boost::multiprecision::checked_int128_t>(c, values, stack, ring, fence_value, out);
+    } catch (const std::overflow_error&) {
+      // Cannot happen for 64-bit values (sums of at most 4, or of m fence terms); exact redo anyway.
+    }
+  }
+  return evaluate<Int>(c, values, stack, ring, fence_value, out);
+}
+
+}  // namespace sweepcheck

@@ -1,0 +1,71 @@
+#include "checker.hpp"
+
+#include <new>
+
+#include "certificate.hpp"
+#include "errors.hpp"
+#include "input.hpp"
+#include "json_reader.hpp"
+#include "sha256.hpp"
+#include "stack.hpp"
+
+namespace sweepcheck {
+
+int check_texts(std::string input_bytes, std::string cert_bytes, std::ostream& out, std::ostream& err) {
+  try {
+    // Everything that makes a file unreadable (exit 2) is found before any certificate rule.
+    const std::string hash = sha256_hex(input_bytes);
+    const json::Document input_doc = json::parse(input_bytes, "INPUT");
+    std::string().swap(input_bytes);
+    const json::Document cert_doc = json::parse(cert_bytes, "CERT");
+    std::string().swap(cert_bytes);
+    std::unique_ptr<Input> in = load_input(input_doc);
+
+    out << "input: " << in->format << ", sha256 " << hash << ", " << in->fence.size() << " fence sensors, "
+        << in->vertex_count() << " sensors in all";
+    if (in->kind == InputKind::ContactLog)
+      out << ", " << in->times.size() << " log frames, " << in->frame_pairs.size() << " pairs, triples "
+          << (in->listed ? "listed" : "from pairs");
+    out << "; valid (§2)\n";
+
+    try {
+      Certificate cert = read_header(cert_doc.root(), *in, hash, out);
+      Stack stack(*in, cert.frames, cert.log_start);
+      std::string summary = cert.method == "sheet" ? check_sheet(cert, stack, out) : check_cocycle(cert, stack, out);
+      if (in->kind == InputKind::ContactLog && cert.method == "sheet")
+        summary += "; assumes every contact present at two consecutive log frames holds in between (§2.2)";
+      out << "ACCEPTED: " << summary << "\n";
+      return 0;
+    } catch (const Rejected& r) {
+      out << r.line << "\n";
+      return 1;
+    }
+  } catch (const Unreadable& e) {
+    err << "sweepcheck: " << e.what() << "\n";
+    return 2;
+  } catch (const std::bad_alloc&) {
+    err << "sweepcheck: out of memory\n";
+    return 2;
+  } catch (const std::exception& e) {
+    // Not expected on any input; never let it look like acceptance.
+    err << "sweepcheck: internal error: " << e.what() << "\n";
+    return 2;
+  }
+}
+
+int check_files(const std::string& input_path, const std::string& cert_path, std::ostream& out, std::ostream& err) {
+  std::string input_bytes, cert_bytes;
+  try {
+    input_bytes = json::read_file(input_path, "INPUT");
+    cert_bytes = json::read_file(cert_path, "CERT");
+  } catch (const Unreadable& e) {
+    err << "sweepcheck: " << e.what() << "\n";
+    return 2;
+  } catch (const std::bad_alloc&) {
+    err << "sweepcheck: out of memory reading the files\n";
+    return 2;
+  }
+  return check_texts(std::move(input_bytes), std::move(cert_bytes), out, err);
+}
+
+}  // namespace sweepcheck

@@ -1,0 +1,300 @@
+#include "input.hpp"
+
+#include <algorithm>
+#include <optional>
+
+#include "errors.hpp"
+#include "fields.hpp"
+
+namespace sweepcheck {
+namespace {
+
+using json::Kind;
+using json::Ref;
+
+[[noreturn]] void invalid(const std::string& pointer, const std::string& what) {
+  throw FieldError(pointer, what);
+}
+
+std::string id_text(std::string_view id) { return "\"" + std::string(id) + "\""; }
+
+// Gives every id its byte-wise rank as vertex index.
+void set_vertices(Input& in, std::vector<std::string> ids) {
+  std::sort(ids.begin(), ids.end());  // std::string compares bytes as unsigned char
+  ids.erase(std::unique(ids.begin(), ids.end()), ids.end());
+  in.names = std::move(ids);
+  in.index.reserve(in.names.size());
+  for (std::size_t i = 0; i < in.names.size(); ++i) in.index.emplace(in.names[i], static_cast<std::uint32_t>(i));
+  in.is_fence.assign(in.names.size(), false);
+}
+
+Rat positive(Ref v, const std::string& pointer, const char* what) {
+  Rat q = get_rational(v, pointer);
+  if (q <= 0) invalid(pointer, std::string(what) + " must be > 0, is " + to_text(q));
+  return q;
+}
+
+Point get_point(Ref v, const std::string& pointer) {
+  expect_array(v, pointer, 2, 2);
+  return Point{get_rational(v[0], at(pointer, 0)), get_rational(v[1], at(pointer, 1))};
+}
+
+// §2.1: consecutive fence disks meet, and the polygon through the centres is simple.
+void check_fence_polygon(const Input& in) {
+  const std::size_t m = in.fence.size();
+  auto centre = [&](std::size_t i) -> const Point& { return in.sensors[in.fence[i % m]].points[0]; };
+  auto name = [&](std::size_t i) { return id_text(in.names[in.fence[i % m]]); };
+  for (std::size_t i = 0; i < m; ++i) {
+    const Sensor& a = in.sensors[in.fence[i]];
+    const Sensor& b = in.sensors[in.fence[(i + 1) % m]];
+    if (!disks_meet(a.points[0], a.radius, b.points[0], b.radius))
+      invalid(at("/fence", (i + 1) % m), "fence gap: the disks of " + name(i) + " and " + name(i + 1) +
+                                             " do not meet (|c_i - c_j|^2 > (r_i + r_j)^2, §2.1)");
+  }
+  for (std::size_t i = 0; i < m; ++i)
+    for (std::size_t j = i + 1; j < m; ++j)
+      if (centre(i).x == centre(j).x && centre(i).y == centre(j).y)
+        invalid(at("/fence", j) + "/at", "fence polygon not simple: centre repeats that of " + name(i) + " (§2.1)");
+  for (std::size_t i = 0; i < m; ++i) {
+    // Adjacent edges p_i p_{i+1} and p_{i+1} p_{i+2} meet only in p_{i+1} unless they are
+    // collinear and the second turns back along the first.
+    const Point &p = centre(i), &q = centre(i + 1), &r = centre(i + 2);
+    Rat dot = (p.x - q.x) * (r.x - q.x) + (p.y - q.y) * (r.y - q.y);
+    if (orientation(p, q, r) == 0 && dot > 0)
+      invalid(at("/fence", (i + 1) % m) + "/at", "fence polygon not simple: it folds back at " + name(i + 1) + " (§2.1)");
+  }
+  for (std::size_t i = 0; i < m; ++i)
+    for (std::size_t j = i + 2; j < m; ++j) {
+      if (i == 0 && j == m - 1) continue;  // adjacent through the closing edge
+      if (segments_meet(centre(i), centre(i + 1), centre(j), centre(j + 1)))
+        invalid(at("/fence", j) + "/at", "fence polygon not simple: edge " + name(j) + "-" + name(j + 1) +
+                                             " meets edge " + name(i) + "-" + name(i + 1) + " (§2.1)");
+    }
+}
+
+void load_scenario(const Members& root, Input& in) {
+  in.kind = InputKind::Scenario;
+  if (auto title = root.get("title")) get_string(*title, root.at("title"));
+  Ref horizon = root.need("horizon");
+  expect_array(horizon, "/horizon", 2, 2);
+  in.horizon_start = get_rational(horizon[0], "/horizon/0");
+  in.horizon_end = get_rational(horizon[1], "/horizon/1");
+  if (!(in.horizon_start < in.horizon_end)) invalid("/horizon/1", "horizon end must be after its start (§2.1)");
+
+  struct Pending { std::string id; Sensor sensor; };
+  std::vector<Pending> all;
+  std::unordered_map<std::string_view, std::string> seen;  // id -> pointer of its first use
+  auto add_id = [&](std::string_view id, const std::string& pointer) {
+    auto [it, fresh] = seen.emplace(id, pointer);
+    if (!fresh) invalid(pointer, "duplicate sensor id " + id_text(id) + " (also at " + it->second + ", §2.1)");
+  };
+
+  Ref fence = root.need("fence");
+  expect_array(fence, "/fence", 3);
+  for (std::size_t i = 0; i < fence.size(); ++i) {
+    std::string p = at("/fence", i);
+    Members f(fence[i], p, {"id", "at", "radius"});
+    std::string_view id = get_id(f.need("id"), f.at("id"));
+    add_id(id, f.at("id"));
+    Sensor s;
+    s.radius = positive(f.need("radius"), f.at("radius"), "radius");
+    s.points.push_back(get_point(f.need("at"), f.at("at")));
+    s.times.push_back(in.horizon_start);
+    all.push_back({std::string(id), std::move(s)});
+  }
+  Ref sensors = root.need("sensors");
+  expect_array(sensors, "/sensors", 0);
+  for (std::size_t i = 0; i < sensors.size(); ++i) {
+    std::string p = at("/sensors", i);
+    Members f(sensors[i], p, {"id", "radius", "track"});
+    std::string_view id = get_id(f.need("id"), f.at("id"));
+    add_id(id, f.at("id"));
+    Sensor s;
+    s.radius = positive(f.need("radius"), f.at("radius"), "radius");
+    Ref track = f.need("track");
+    expect_array(track, f.at("track"), 1);
+    for (std::size_t r = 0; r < track.size(); ++r) {
+      std::string rp = at(f.at("track"), r);
+      expect_array(track[r], rp, 3, 3);
+      Rat t = get_rational(track[r][0], at(rp, 0));
+      if (!s.times.empty() && !(s.times.back() < t))
+        invalid(at(rp, 0), "track times must increase strictly: " + to_text(t) + " after " + to_text(s.times.back()) + " (§2.1)");
+      s.times.push_back(t);
+      s.points.push_back(Point{get_rational(track[r][1], at(rp, 1)), get_rational(track[r][2], at(rp, 2))});
+    }
+    all.push_back({std::string(id), std::move(s)});
+  }
+
+  std::vector<std::string> ids;
+  for (const auto& s : all) ids.push_back(s.id);
+  set_vertices(in, ids);
+  in.sensors.resize(in.names.size());
+  for (std::size_t i = 0; i < all.size(); ++i) {
+    std::uint32_t v = in.index.at(all[i].id);
+    in.sensors[v] = std::move(all[i].sensor);
+    if (i < fence.size()) { in.fence.push_back(v); in.is_fence[v] = true; }
+  }
+  check_fence_polygon(in);
+}
+
+void load_contact_log(const Members& root, Input& in) {
+  in.kind = InputKind::ContactLog;
+  if (auto title = root.get("title")) get_string(*title, root.at("title"));
+
+  std::unordered_map<std::string_view, std::string> declared;  // fence and sensors ids
+  Ref fence = root.need("fence");
+  expect_array(fence, "/fence", 3);
+  for (std::size_t i = 0; i < fence.size(); ++i) {
+    std::string_view id = get_id(fence[i], at("/fence", i));
+    auto [it, fresh] = declared.emplace(id, at("/fence", i));
+    if (!fresh) invalid(at("/fence", i), "duplicate fence id " + id_text(id) + " (also at " + it->second + ", §2.2)");
+  }
+  auto sensors = root.get("sensors");
+  if (sensors) {
+    expect_array(*sensors, "/sensors", 0);
+    for (std::size_t i = 0; i < sensors->size(); ++i) {
+      std::string_view id = get_id((*sensors)[i], at("/sensors", i));
+      auto [it, fresh] = declared.emplace(id, at("/sensors", i));
+      if (!fresh) invalid(at("/sensors", i), "id " + id_text(id) + " already used at " + it->second + " (§2.2)");
+    }
+  }
+
+  Ref triangles = root.need("triangles");
+  if (triangles.is(Kind::String)) {
+    if (triangles.text() != "listed") invalid("/triangles", "must be \"listed\" or {\"from-pairs\": {...}} (§2.2)");
+    in.listed = true;
+  } else {
+    in.listed = false;
+    Members t(triangles, "/triangles", {"from-pairs"});
+    Members fp(t.need("from-pairs"), t.at("from-pairs"), {"contact-range", "sensing-radius"});
+    Rat rc = positive(fp.need("contact-range"), fp.at("contact-range"), "contact-range");
+    Rat rs = positive(fp.need("sensing-radius"), fp.at("sensing-radius"), "sensing-radius");
+    if (3 * rs * rs < rc * rc)
+      invalid(t.at("from-pairs"), "3*R_s^2 < R_c^2: pairwise contacts do not imply triple contacts (§2.2)");
+  }
+
+  // Pass 1: shapes, times and the vertex set.
+  Ref frames = root.need("frames");
+  expect_array(frames, "/frames", 1);
+  struct FrameRefs { std::optional<Ref> pairs, triples; };
+  std::vector<FrameRefs> refs;
+  std::unordered_map<std::string_view, char> used;
+  auto use = [&](Ref v, const std::string& pointer) {
+    std::string_view id = get_id(v, pointer);
+    if (sensors && !declared.count(id))
+      invalid(pointer, "unknown id " + id_text(id) + ": neither a fence id nor listed in /sensors (§2.2)");
+    if (!sensors) used.emplace(id, 0);
+  };
+  for (std::size_t f = 0; f < frames.size(); ++f) {
+    std::string fp = at("/frames", f);
+    Members fr(frames[f], fp, {"t", "pairs", "triples"});
+    Rat t = get_rational(fr.need("t"), fr.at("t"));
+    if (!in.times.empty() && !(in.times.back() < t))
+      invalid(fr.at("t"), "frame times must increase strictly: " + to_text(t) + " after " + to_text(in.times.back()) + " (§2.2)");
+    in.times.push_back(t);
+    Ref pairs = fr.need("pairs");
+    expect_array(pairs, fr.at("pairs"), 0);
+    for (std::size_t i = 0; i < pairs.size(); ++i) {
+      std::string pp = at(fr.at("pairs"), i);
+      expect_array(pairs[i], pp, 2, 2);
+      for (std::size_t j = 0; j < 2; ++j) use(pairs[i][j], at(pp, j));
+    }
+    std::optional<Ref> triples = fr.get("triples");
+    if (in.listed && !triples) invalid(fr.at("triples"), "required with \"triangles\": \"listed\" (§2.2)");
+    if (!in.listed && triples) invalid(fr.at("triples"), "not allowed with \"from-pairs\" (§2.2)");
+    if (triples) {
+      expect_array(*triples, fr.at("triples"), 0);
+      for (std::size_t i = 0; i < triples->size(); ++i) {
+        std::string tp = at(fr.at("triples"), i);
+        expect_array((*triples)[i], tp, 3, 3);
+        for (std::size_t j = 0; j < 3; ++j) use((*triples)[i][j], at(tp, j));
+      }
+    }
+    refs.push_back({pairs, triples});
+  }
+  std::vector<std::string> ids;
+  for (const auto& d : declared) ids.emplace_back(d.first);
+  for (const auto& u : used) ids.emplace_back(u.first);
+  set_vertices(in, std::move(ids));
+  for (std::size_t i = 0; i < fence.size(); ++i) {
+    std::uint32_t v = in.index.at(fence[i].text());
+    in.fence.push_back(v);
+    in.is_fence[v] = true;
+  }
+
+  // Pass 2: pairs and triples by compact ids, with the per-frame rules.
+  auto vertex = [&](Ref v) { return in.index.at(v.text()); };
+  for (std::size_t f = 0; f < frames.size(); ++f) {
+    const std::uint32_t frame = static_cast<std::uint32_t>(f);
+    std::string fp = at("/frames", f);
+    in.pairs_begin.push_back(in.frame_pairs.size());
+    Ref pairs = *refs[f].pairs;
+    for (std::size_t i = 0; i < pairs.size(); ++i) {
+      std::uint32_t a = vertex(pairs[i][0]), b = vertex(pairs[i][1]);
+      if (a == b) invalid(at(fp + "/pairs", i), "pair of identical ids " + id_text(in.names[a]) + " (§2.2)");
+      if (b < a) std::swap(a, b);
+      std::uint32_t id = in.pairs.intern(a, b);
+      if (!in.pair_at.insert(pack(id, frame), 0).second)
+        invalid(at(fp + "/pairs", i), "pair {" + in.names[a] + ", " + in.names[b] + "} listed twice in this frame (§2.2)");
+      in.frame_pairs.push_back(id);
+    }
+    in.triples_begin.push_back(in.frame_triples.size());
+    if (refs[f].triples) {
+      Ref triples = *refs[f].triples;
+      for (std::size_t i = 0; i < triples.size(); ++i) {
+        std::string tp = at(fp + "/triples", i);
+        std::array<std::uint32_t, 3> v{vertex(triples[i][0]), vertex(triples[i][1]), vertex(triples[i][2])};
+        std::sort(v.begin(), v.end());
+        if (v[0] == v[1] || v[1] == v[2]) invalid(tp, "triple with a repeated id (§2.2)");
+        const std::pair<int, int> sides[3] = {{0, 1}, {0, 2}, {1, 2}};
+        for (auto [x, y] : sides) {
+          std::uint32_t id = in.pairs.find(v[x], v[y]);
+          if (id == PairTable::kNone || !in.pair_at.contains(pack(id, frame)))
+            invalid(tp, "pair {" + in.names[v[x]] + ", " + in.names[v[y]] + "} of this triple is not listed in the frame (§2.2)");
+        }
+        std::uint32_t ab = in.pairs.find(v[0], v[1]);
+        auto [tid, fresh] = in.triple_ids.insert(pack(ab, v[2]), static_cast<std::uint32_t>(in.triples.size()));
+        if (fresh) in.triples.push_back(v);
+        if (!in.triple_at.insert(pack(*tid, frame), 0).second) invalid(tp, "triple listed twice in this frame (§2.2)");
+        in.frame_triples.push_back(*tid);
+      }
+    }
+    const std::size_t m = in.fence.size();
+    for (std::size_t i = 0; i < m; ++i) {
+      std::uint32_t a = in.fence[i], b = in.fence[(i + 1) % m];
+      std::uint32_t id = in.pairs.find(std::min(a, b), std::max(a, b));
+      if (id == PairTable::kNone || !in.pair_at.contains(pack(id, frame)))
+        invalid(fp + "/pairs", "consecutive fence ids {" + in.names[a] + ", " + in.names[b] + "} are not a pair in this frame (§2.2)");
+    }
+  }
+  in.pairs_begin.push_back(in.frame_pairs.size());
+  in.triples_begin.push_back(in.frame_triples.size());
+}
+
+}  // namespace
+
+std::unique_ptr<Input> load_input(const json::Document& doc) {
+  auto in = std::make_unique<Input>();
+  try {
+    Ref root = doc.root();
+    expect_kind(root, Kind::Object, "");
+    // Read `format` first: it decides which keys are allowed.
+    std::optional<Ref> format;
+    for (std::size_t i = 0; i < root.size(); ++i)
+      if (root.key(i) == "format") { format = root.value(i); break; }
+    if (!format) invalid("/format", "required key \"format\" is missing");
+    in->format = std::string(get_string(*format, "/format"));
+    if (in->format == "sweepcert-scenario-1") {
+      load_scenario(Members(root, "", {"format", "title", "horizon", "fence", "sensors"}), *in);
+    } else if (in->format == "sweepcert-contacts-1") {
+      load_contact_log(Members(root, "", {"format", "title", "fence", "sensors", "triangles", "frames"}), *in);
+    } else {
+      invalid("/format", "unknown format \"" + in->format + "\" (expected sweepcert-scenario-1 or sweepcert-contacts-1)");
+    }
+  } catch (const FieldError& e) {
+    throw Unreadable("INPUT " + (e.pointer.empty() ? std::string("(root)") : e.pointer) + ": " + e.message);
+  }
+  return in;
+}
+
+}  // namespace sweepcheck

@@ -1,0 +1,71 @@
+// Reading and fully validating the input the certificate speaks about (schema/README.md §2):
+// a positional scenario or a contact log. Any violation is Unreadable (exit 2) naming the JSON
+// pointer and the rule.
+#pragma once
+#include <array>
+#include <cstdint>
+#include <memory>
+#include <string>
+#include <string_view>
+#include <unordered_map>
+#include <vector>
+
+#include "flat_map.hpp"
+#include "geometry.hpp"
+#include "json_reader.hpp"
+
+namespace sweepcheck {
+
+enum class InputKind { Scenario, ContactLog };
+
+// A sensor of a positional scenario. Fence sensors have one track row (their `at`).
+struct Sensor {
+  Rat radius;
+  std::vector<Rat> times;
+  std::vector<Point> points;
+};
+
+struct Input {
+  InputKind kind = InputKind::Scenario;
+  std::string format;  // the input's `format` string
+
+  // Vertices. A vertex's index is the rank of its id in byte-wise order (§1.3), so comparing
+  // indices compares ids, and the canonical orientation (§3.2) is increasing index order.
+  std::vector<std::string> names;
+  std::unordered_map<std::string_view, std::uint32_t> index;  // views into `names`
+  std::vector<std::uint32_t> fence;                            // listed cyclic order
+  std::vector<bool> is_fence;
+
+  // Positional scenario (§2.1), indexed by vertex.
+  Rat horizon_start, horizon_end;
+  std::vector<Sensor> sensors;
+
+  // Contact log (§2.2).
+  bool listed = true;  // "triangles": "listed"; otherwise from-pairs
+  std::vector<Rat> times;
+  PairTable pairs;                          // every pair named anywhere in the log
+  std::vector<std::uint32_t> frame_pairs;   // pair ids, frame by frame
+  std::vector<std::size_t> pairs_begin;     // frame f's pairs: [pairs_begin[f], pairs_begin[f+1])
+  FlatMap<char> pair_at;                    // pack(pair id, frame)
+  std::vector<std::array<std::uint32_t, 3>> triples;  // listed triples, canonical
+  FlatMap<std::uint32_t> triple_ids;        // pack(pair id of (a, b), c) -> triple id
+  std::vector<std::uint32_t> frame_triples;
+  std::vector<std::size_t> triples_begin;
+  FlatMap<char> triple_at;                  // pack(triple id, frame)
+
+  Input() = default;
+  Input(const Input&) = delete;  // `index` views into `names`
+  Input& operator=(const Input&) = delete;
+
+  // The vertex named `id`, or -1.
+  std::int64_t find(std::string_view id) const {
+    auto it = index.find(id);
+    return it == index.end() ? -1 : std::int64_t(it->second);
+  }
+  std::size_t vertex_count() const { return names.size(); }
+};
+
+// Validates `doc` as a scenario or contact log. Throws Unreadable("INPUT <pointer>: ...").
+std::unique_ptr<Input> load_input(const json::Document& doc);
+
+}  // namespace sweepcheck

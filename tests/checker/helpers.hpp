@@ -1,0 +1,49 @@
+// Shared helpers of the checker unit tests: run the whole check on in-memory texts.
+#pragma once
+#include <sstream>
+#include <string>
+
+#include "checker.hpp"
+#include "sha256.hpp"
+
+namespace sweepcheck_test {
+
+struct Run {
+  int code = -1;
+  std::string out, err;
+  // The final line of stdout (ACCEPTED... / REJECTED...).
+  std::string last() const {
+    std::string s = out;
+    while (!s.empty() && s.back() == '\n') s.pop_back();
+    auto nl = s.rfind('\n');
+    return nl == std::string::npos ? s : s.substr(nl + 1);
+  }
+};
+
+inline void replace_all(std::string& s, const std::string& from, const std::string& to) {
+  for (auto p = s.find(from); p != std::string::npos; p = s.find(from, p + to.size())) s.replace(p, from.size(), to);
+}
+
+// Runs sweepcheck on (input, cert); "@HASH" in cert becomes the SHA-256 of input.
+inline Run run(const std::string& input, std::string cert) {
+  replace_all(cert, "@HASH", sweepcheck::sha256_hex(input));
+  std::ostringstream out, err;
+  Run r;
+  r.code = sweepcheck::check_texts(input, cert, out, err);
+  r.out = out.str();
+  r.err = err.str();
+  return r;
+}
+
+// A certificate with the common fields filled in; `rest` holds the method's keys.
+inline std::string certificate(const std::string& method, const std::string& input_format, const std::string& ring,
+                               const std::string& frames, const std::string& rest) {
+  const bool sheet = method == "sheet";
+  return std::string(R"({"format":"sweepcert-certificate-1","claim":")") + (sheet ? "no-evasion" : "no-sheet") +
+         R"(","method":")" + method + R"(","input_sha256":"@HASH","input_format":")" + input_format +
+         R"(","ring":")" + ring + R"(","frames":)" + frames + "," + rest + "}";
+}
+
+inline bool starts_with(const std::string& s, const std::string& prefix) { return s.rfind(prefix, 0) == 0; }
+
+}  // namespace sweepcheck_test
