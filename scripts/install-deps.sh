@@ -1,0 +1,17 @@
+#!/usr/bin/env bash
+# Installs everything sweepcert needs to build and test, from Debian 12 packages (run as root).
+set -euo pipefail
+packages=(g++ cmake make libgmp-dev libboost-dev nlohmann-json3-dev catch2 libssl-dev
+          libgudhi-dev libcgal-dev libeigen3-dev)
+missing=()
+for p in "${packages[@]}"; do
+  dpkg-query -W -f='${Status}' "$p" 2>/dev/null | grep -q "install ok installed" || missing+=("$p")
+done
+if ((${#missing[@]})); then
+  echo "== installing: ${missing[*]}"
+  export DEBIAN_FRONTEND=noninteractive
+  apt-get update -qq
+  apt-get install -y -qq --no-install-recommends "${missing[@]}"
+else
+  echo "== all build dependencies are installed"
+fi
