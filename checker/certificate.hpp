@@ -4,8 +4,10 @@
 #include <cstdint>
 #include <ostream>
 #include <string>
+#include <type_traits>
 #include <vector>
 
+#include "checked64.hpp"
 #include "fields.hpp"
 #include "input.hpp"
 #include "stack.hpp"
@@ -35,8 +37,16 @@ class Values {
   // Reads a nonzero integer string; over z2 it must be "1". `rule` is quoted in messages.
   Value read(json::Ref v, const Where& where, Ring ring, const char* rule);
   bool any_big() const { return !bigs_.empty(); }
+  // As Checked64 (only when !any_big()) or as Int.
   template <class V>
-  V get(const Value& x) const { return x.big < 0 ? V(x.small) : V(bigs_.at(static_cast<std::size_t>(x.big))); }
+  V get(const Value& x) const {
+    if constexpr (std::is_same_v<V, Checked64>) {
+      if (x.big >= 0) throw std::overflow_error("value beyond 64 bits");
+      return V(x.small);
+    } else {
+      return x.big < 0 ? V(x.small) : V(bigs_.at(static_cast<std::size_t>(x.big)));
+    }
+  }
 
  private:
   std::vector<Int> bigs_;
@@ -68,5 +78,8 @@ std::string check_sheet(const Certificate& cert, Stack& stack, std::ostream& out
 std::string check_cocycle(const Certificate& cert, Stack& stack, std::ostream& out);
 
 std::string ring_name(Ring r);
+
+inline Int to_int(const Int& x) { return x; }
+inline Int to_int(const Checked64& x) { return Int(x.value()); }
 
 }  // namespace sweepcheck

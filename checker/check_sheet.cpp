@@ -1,6 +1,6 @@
 // Sheet certificates (schema/README.md §4.3): a 2-chain alpha on the stack whose boundary lies
 // on the fence cylinder and winds `winding` times around it.
-#include <boost/multiprecision/cpp_int.hpp>
+#include <sstream>
 
 #include "certificate.hpp"
 #include "errors.hpp"
@@ -51,12 +51,14 @@ std::string face_text(Stack& stack, bool vertical, std::uint64_t key) {
 template <class V>
 bool nonzero(const V& x, Ring ring) { return ring == Ring::Z ? x != 0 : (x % 2) != 0; }
 
-// Rules 3 and 4 with coefficients of type V (a checked 128-bit type, or Int when some
-// coefficient does not fit 64 bits). Throws Rejected, or std::overflow_error from a checked V.
+// Rules 3 and 4 with coefficients of type V: Checked64, or Int when some coefficient does not
+// fit 64 bits or a Checked64 sum overflowed. Throws Rejected, or std::overflow_error from
+// Checked64.
 template <class V>
 std::string boundary_and_winding(const std::vector<Row>& rows, const Values& values, Stack& stack, Ring ring,
                                  const Int& winding, std::ostream& out) {
   FlatMap<V> edges, verticals;
+  edges.reserve(rows.size());
   for (const Row& r : rows) {
     const V c = r.sign < 0 ? V(-values.get<V>(r.coef)) : values.get<V>(r.coef);
     for_each_face(r, stack, [&](bool vertical, std::uint64_t key, int s) {
@@ -104,7 +106,7 @@ std::string boundary_and_winding(const std::vector<Row>& rows, const Values& val
   });
   const auto& fence = stack.input().fence;
   for (std::size_t i = 0; i < wind.size(); ++i) {
-    bool ok = ring == Ring::Z ? Int(wind[i]) == winding : nonzero(wind[i], ring);
+    bool ok = ring == Ring::Z ? to_int(wind[i]) == winding : nonzero(wind[i], ring);
     if (!ok)
       throw Rejected("/winding",
                      "fence edge [" + stack.name(fence[i]) + "," + stack.name(fence[(i + 1) % fence.size()]) + "]",
@@ -113,8 +115,12 @@ std::string boundary_and_winding(const std::vector<Row>& rows, const Values& val
   }
   out << "winding: " << winding << (ring == Ring::Z2 ? " (mod 2)" : "") << " along each of the " << wind.size()
       << " fence edges (rule 4)\n";
-  return "no evasion path on [" + to_text(stack.time(0)) + ", " + to_text(stack.time(stack.frame_count() - 1)) +
-         "]: sheet over " + ring_name(ring) + " with winding " + winding.str();
+  // §4.3: no evasion path on [t_0, t_n], hence none on the whole horizon.
+  std::string span = "[" + to_text(stack.time(0)) + ", " + to_text(stack.time(stack.frame_count() - 1)) + "]";
+  if (stack.positional())
+    span += ", hence none on the horizon [" + to_text(stack.input().horizon_start) + ", " +
+            to_text(stack.input().horizon_end) + "]";
+  return "no evasion path on " + span + " (sheet over " + ring_name(ring) + ", winding " + winding.str() + ")";
 }
 
 }  // namespace
@@ -141,6 +147,12 @@ std::string check_sheet(const Certificate& cert, Stack& stack, std::ostream& out
 
   Ref triangles = m.need("triangles");
   if (!triangles.is(json::Kind::Array)) throw Rejected("/triangles", "", "expected an array (§4.3)");
+  Ref prisms = m.need("prisms");
+  if (!prisms.is(json::Kind::Array)) throw Rejected("/prisms", "", "expected an array (§4.3)");
+  rows.reserve(triangles.size() + prisms.size());
+  triple_ids.reserve(triangles.size());
+  seen.reserve(triangles.size());
+  seen_prisms.reserve(prisms.size());
   const bool positional = stack.positional();
   const std::size_t length = positional ? 7 : 5;
   for (std::size_t i = 0; i < triangles.size(); ++i) {
@@ -183,8 +195,6 @@ std::string check_sheet(const Certificate& cert, Stack& stack, std::ostream& out
     rows.push_back(r);
   }
 
-  Ref prisms = m.need("prisms");
-  if (!prisms.is(json::Kind::Array)) throw Rejected("/prisms", "", "expected an array (§4.3)");
   for (std::size_t i = 0; i < prisms.size(); ++i) {
     const Where w{"/prisms", i};
     Ref row = prisms[i];
@@ -208,10 +218,16 @@ std::string check_sheet(const Certificate& cert, Stack& stack, std::ostream& out
       << " prisms, every cell present, none twice, no zero coefficient (rules 1, 2)\n";
 
   if (!values.any_big()) {
+    std::ostringstream findings;  // printed once, whichever path finishes
     try {
-      return boundary_and_winding<boost::multiprecision::checked_int128_t>(rows, values, stack, ring, winding, out);
+      std::string summary = boundary_and_winding<Checked64>(rows, values, stack, ring, winding, findings);
+      out << findings.str();
+      return summary;
+    } catch (const Rejected&) {
+      out << findings.str();
+      throw;
     } catch (const std::overflow_error&) {
-      // A sum left 128 bits (impossible below 2^64 rows, kept as a safety net): redo exactly.
+      // A sum left 64 bits: redo exactly.
     }
   }
   return boundary_and_winding<Int>(rows, values, stack, ring, winding, out);

@@ -18,10 +18,16 @@ class FlatMap {
 
   FlatMap() { rehash(16); }
   std::size_t size() const { return size_; }
+  // Room for n entries without rehashing.
+  void reserve(std::size_t n) {
+    std::size_t capacity = slots_.size();
+    while (capacity < 2 * n) capacity *= 2;
+    if (capacity != slots_.size()) rehash(capacity);
+  }
 
   V* find(std::uint64_t key) {
-    std::size_t i = slot(key);
-    return keys_[i] == key ? &values_[i] : nullptr;
+    Slot& s = slots_[slot(key)];
+    return s.key == key ? &s.value : nullptr;
   }
   const V* find(std::uint64_t key) const { return const_cast<FlatMap*>(this)->find(key); }
   bool contains(std::uint64_t key) const { return find(key) != nullptr; }
@@ -29,23 +35,27 @@ class FlatMap {
   // Inserts (key, value) unless key is present. Returns the stored value and whether it was new.
   std::pair<V*, bool> insert(std::uint64_t key, const V& value) {
     if (key == kEmpty) throw std::logic_error("FlatMap: reserved key");
-    if (2 * (size_ + 1) > keys_.size()) rehash(2 * keys_.size());
-    std::size_t i = slot(key);
-    if (keys_[i] == key) return {&values_[i], false};
-    keys_[i] = key;
-    values_[i] = value;
+    if (2 * (size_ + 1) > slots_.size()) rehash(2 * slots_.size());
+    Slot& s = slots_[slot(key)];
+    if (s.key == key) return {&s.value, false};
+    s.key = key;
+    s.value = value;
     ++size_;
-    return {&values_[i], true};
+    return {&s.value, true};
   }
 
   // Visits every entry (in no particular order) as f(key, value).
   template <class F>
   void for_each(F&& f) const {
-    for (std::size_t i = 0; i < keys_.size(); ++i)
-      if (keys_[i] != kEmpty) f(keys_[i], values_[i]);
+    for (const Slot& s : slots_)
+      if (s.key != kEmpty) f(s.key, s.value);
   }
 
  private:
+  struct Slot {  // key and value side by side: one cache line per probe
+    std::uint64_t key = kEmpty;
+    V value{};
+  };
   static std::uint64_t mix(std::uint64_t x) {  // splitmix64 finaliser
     x ^= x >> 30; x *= 0xbf58476d1ce4e5b9ULL;
     x ^= x >> 27; x *= 0x94d049bb133111ebULL;
@@ -53,27 +63,22 @@ class FlatMap {
   }
   // The slot holding key, or the empty slot where it would go (linear probing).
   std::size_t slot(std::uint64_t key) const {
-    std::size_t mask = keys_.size() - 1, i = mix(key) & mask;
-    while (keys_[i] != key && keys_[i] != kEmpty) i = (i + 1) & mask;
+    std::size_t mask = slots_.size() - 1, i = mix(key) & mask;
+    while (slots_[i].key != key && slots_[i].key != kEmpty) i = (i + 1) & mask;
     return i;
   }
   void rehash(std::size_t capacity) {
-    std::vector<std::uint64_t> old_keys(capacity, kEmpty);
-    std::vector<V> old_values(capacity);
-    old_keys.swap(keys_);
-    old_values.swap(values_);
+    std::vector<Slot> old(capacity);
+    old.swap(slots_);
     size_ = 0;
-    for (std::size_t i = 0; i < old_keys.size(); ++i)
-      if (old_keys[i] != kEmpty) {
-        std::size_t j = slot(old_keys[i]);
-        keys_[j] = old_keys[i];
-        values_[j] = std::move(old_values[i]);
+    for (Slot& s : old)
+      if (s.key != kEmpty) {
+        slots_[slot(s.key)] = std::move(s);
         ++size_;
       }
   }
 
-  std::vector<std::uint64_t> keys_;
-  std::vector<V> values_;
+  std::vector<Slot> slots_;
   std::size_t size_ = 0;
 };
 

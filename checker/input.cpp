@@ -72,6 +72,18 @@ void check_fence_polygon(const Input& in) {
     }
 }
 
+// From the ids listed frame by frame, the frames listing each id (increasing): a counting sort.
+void invert(const std::vector<std::uint32_t>& by_frame, const std::vector<std::size_t>& frame_begin, std::size_t ids,
+            std::vector<std::uint32_t>& frames, std::vector<std::size_t>& begin) {
+  begin.assign(ids + 1, 0);
+  for (std::uint32_t id : by_frame) ++begin[id + 1];
+  for (std::size_t i = 0; i < ids; ++i) begin[i + 1] += begin[i];
+  std::vector<std::size_t> next(begin.begin(), begin.end() - 1);
+  frames.resize(by_frame.size());
+  for (std::size_t f = 0; f + 1 < frame_begin.size(); ++f)
+    for (std::size_t i = frame_begin[f]; i < frame_begin[f + 1]; ++i) frames[next[by_frame[i]]++] = static_cast<std::uint32_t>(f);
+}
+
 void load_scenario(const Members& root, Input& in) {
   in.kind = InputKind::Scenario;
   if (auto title = root.get("title")) get_string(*title, root.at("title"));
@@ -173,17 +185,27 @@ void load_contact_log(const Members& root, Input& in) {
       invalid(t.at("from-pairs"), "3*R_s^2 < R_c^2: pairwise contacts do not imply triple contacts (§2.2)");
   }
 
-  // Pass 1: shapes, times and the vertex set.
+  // Pass 1: shapes, times and the vertex set. Pointers are only built for a message: a log
+  // may hold millions of pairs.
   Ref frames = root.need("frames");
   expect_array(frames, "/frames", 1);
-  struct FrameRefs { std::optional<Ref> pairs, triples; };
+  struct FrameRefs { Ref pairs; std::optional<Ref> triples; };
   std::vector<FrameRefs> refs;
   std::unordered_map<std::string_view, char> used;
-  auto use = [&](Ref v, const std::string& pointer) {
-    std::string_view id = get_id(v, pointer);
-    if (sensors && !declared.count(id))
-      invalid(pointer, "unknown id " + id_text(id) + ": neither a fence id nor listed in /sensors (§2.2)");
+  auto use = [&](Ref v, const std::string& list, std::size_t i, std::size_t j) {
+    if (!v.is(Kind::String) || v.text().empty() || v.text().size() > 64) get_id(v, at(at(list, i), j));  // throws
+    std::string_view id = v.text();
     if (!sensors) used.emplace(id, 0);
+    else if (!declared.count(id))
+      invalid(at(at(list, i), j), "unknown id " + id_text(id) + ": neither a fence id nor listed in /sensors (§2.2)");
+  };
+  auto tuples = [&](Ref list, const std::string& pointer, std::size_t length) {
+    expect_array(list, pointer, 0);
+    for (std::size_t i = 0; i < list.size(); ++i) {
+      Ref t = list[i];
+      if (!t.is(Kind::Array) || t.size() != length) expect_array(t, at(pointer, i), length, length);  // throws
+      for (std::size_t j = 0; j < length; ++j) use(t[j], pointer, i, j);
+    }
   };
   for (std::size_t f = 0; f < frames.size(); ++f) {
     std::string fp = at("/frames", f);
@@ -193,23 +215,11 @@ void load_contact_log(const Members& root, Input& in) {
       invalid(fr.at("t"), "frame times must increase strictly: " + to_text(t) + " after " + to_text(in.times.back()) + " (§2.2)");
     in.times.push_back(t);
     Ref pairs = fr.need("pairs");
-    expect_array(pairs, fr.at("pairs"), 0);
-    for (std::size_t i = 0; i < pairs.size(); ++i) {
-      std::string pp = at(fr.at("pairs"), i);
-      expect_array(pairs[i], pp, 2, 2);
-      for (std::size_t j = 0; j < 2; ++j) use(pairs[i][j], at(pp, j));
-    }
+    tuples(pairs, fr.at("pairs"), 2);
     std::optional<Ref> triples = fr.get("triples");
     if (in.listed && !triples) invalid(fr.at("triples"), "required with \"triangles\": \"listed\" (§2.2)");
     if (!in.listed && triples) invalid(fr.at("triples"), "not allowed with \"from-pairs\" (§2.2)");
-    if (triples) {
-      expect_array(*triples, fr.at("triples"), 0);
-      for (std::size_t i = 0; i < triples->size(); ++i) {
-        std::string tp = at(fr.at("triples"), i);
-        expect_array((*triples)[i], tp, 3, 3);
-        for (std::size_t j = 0; j < 3; ++j) use((*triples)[i][j], at(tp, j));
-      }
-    }
+    if (triples) tuples(*triples, fr.at("triples"), 3);
     refs.push_back({pairs, triples});
   }
   std::vector<std::string> ids;
@@ -222,53 +232,63 @@ void load_contact_log(const Members& root, Input& in) {
     in.is_fence[v] = true;
   }
 
-  // Pass 2: pairs and triples by compact ids, with the per-frame rules.
-  auto vertex = [&](Ref v) { return in.index.at(v.text()); };
+  // Pass 2: pairs and triples by compact ids, with the per-frame rules. last_pair[id] and
+  // last_triple[id] hold 1 + the last frame that listed the id: duplicates within a frame and
+  // the pairs of a triple are checked without any hashing of (id, frame).
+  std::vector<std::uint32_t> last_pair, last_triple;
+  auto vertex = [&](Ref v) { return in.index.find(v.text())->second; };
+  auto pair_in_frame = [&](std::uint32_t a, std::uint32_t b, std::uint32_t frame) {
+    std::uint32_t id = in.pairs.find(a, b);
+    return id != PairTable::kNone && last_pair[id] == frame + 1;
+  };
   for (std::size_t f = 0; f < frames.size(); ++f) {
     const std::uint32_t frame = static_cast<std::uint32_t>(f);
-    std::string fp = at("/frames", f);
+    auto where = [&](const char* list, std::size_t i) { return at(at("/frames", f) + list, i); };
     in.pairs_begin.push_back(in.frame_pairs.size());
-    Ref pairs = *refs[f].pairs;
+    Ref pairs = refs[f].pairs;
     for (std::size_t i = 0; i < pairs.size(); ++i) {
       std::uint32_t a = vertex(pairs[i][0]), b = vertex(pairs[i][1]);
-      if (a == b) invalid(at(fp + "/pairs", i), "pair of identical ids " + id_text(in.names[a]) + " (§2.2)");
+      if (a == b) invalid(where("/pairs", i), "pair of identical ids " + id_text(in.names[a]) + " (§2.2)");
       if (b < a) std::swap(a, b);
       std::uint32_t id = in.pairs.intern(a, b);
-      if (!in.pair_at.insert(pack(id, frame), 0).second)
-        invalid(at(fp + "/pairs", i), "pair {" + in.names[a] + ", " + in.names[b] + "} listed twice in this frame (§2.2)");
+      if (id >= last_pair.size()) last_pair.resize(id + 1, 0);
+      if (last_pair[id] == frame + 1)
+        invalid(where("/pairs", i), "pair {" + in.names[a] + ", " + in.names[b] + "} listed twice in this frame (§2.2)");
+      last_pair[id] = frame + 1;
       in.frame_pairs.push_back(id);
     }
     in.triples_begin.push_back(in.frame_triples.size());
     if (refs[f].triples) {
       Ref triples = *refs[f].triples;
       for (std::size_t i = 0; i < triples.size(); ++i) {
-        std::string tp = at(fp + "/triples", i);
         std::array<std::uint32_t, 3> v{vertex(triples[i][0]), vertex(triples[i][1]), vertex(triples[i][2])};
         std::sort(v.begin(), v.end());
-        if (v[0] == v[1] || v[1] == v[2]) invalid(tp, "triple with a repeated id (§2.2)");
+        if (v[0] == v[1] || v[1] == v[2]) invalid(where("/triples", i), "triple with a repeated id (§2.2)");
         const std::pair<int, int> sides[3] = {{0, 1}, {0, 2}, {1, 2}};
-        for (auto [x, y] : sides) {
-          std::uint32_t id = in.pairs.find(v[x], v[y]);
-          if (id == PairTable::kNone || !in.pair_at.contains(pack(id, frame)))
-            invalid(tp, "pair {" + in.names[v[x]] + ", " + in.names[v[y]] + "} of this triple is not listed in the frame (§2.2)");
-        }
+        for (auto [x, y] : sides)
+          if (!pair_in_frame(v[x], v[y], frame))
+            invalid(where("/triples", i),
+                    "pair {" + in.names[v[x]] + ", " + in.names[v[y]] + "} of this triple is not listed in the frame (§2.2)");
         std::uint32_t ab = in.pairs.find(v[0], v[1]);
         auto [tid, fresh] = in.triple_ids.insert(pack(ab, v[2]), static_cast<std::uint32_t>(in.triples.size()));
-        if (fresh) in.triples.push_back(v);
-        if (!in.triple_at.insert(pack(*tid, frame), 0).second) invalid(tp, "triple listed twice in this frame (§2.2)");
+        if (fresh) { in.triples.push_back(v); last_triple.push_back(0); }
+        if (last_triple[*tid] == frame + 1) invalid(where("/triples", i), "triple listed twice in this frame (§2.2)");
+        last_triple[*tid] = frame + 1;
         in.frame_triples.push_back(*tid);
       }
     }
     const std::size_t m = in.fence.size();
     for (std::size_t i = 0; i < m; ++i) {
       std::uint32_t a = in.fence[i], b = in.fence[(i + 1) % m];
-      std::uint32_t id = in.pairs.find(std::min(a, b), std::max(a, b));
-      if (id == PairTable::kNone || !in.pair_at.contains(pack(id, frame)))
-        invalid(fp + "/pairs", "consecutive fence ids {" + in.names[a] + ", " + in.names[b] + "} are not a pair in this frame (§2.2)");
+      if (!pair_in_frame(std::min(a, b), std::max(a, b), frame))
+        invalid(at("/frames", f) + "/pairs",
+                "consecutive fence ids {" + in.names[a] + ", " + in.names[b] + "} are not a pair in this frame (§2.2)");
     }
   }
   in.pairs_begin.push_back(in.frame_pairs.size());
   in.triples_begin.push_back(in.frame_triples.size());
+  invert(in.frame_pairs, in.pairs_begin, in.pairs.size(), in.pair_frames, in.pair_frames_begin);
+  invert(in.frame_triples, in.triples_begin, in.triples.size(), in.triple_frames, in.triple_frames_begin);
 }
 
 }  // namespace

@@ -2,6 +2,7 @@
 // a positional scenario or a contact log. Any violation is Unreadable (exit 2) naming the JSON
 // pointer and the rule.
 #pragma once
+#include <algorithm>
 #include <array>
 #include <cstdint>
 #include <memory>
@@ -46,12 +47,20 @@ struct Input {
   PairTable pairs;                          // every pair named anywhere in the log
   std::vector<std::uint32_t> frame_pairs;   // pair ids, frame by frame
   std::vector<std::size_t> pairs_begin;     // frame f's pairs: [pairs_begin[f], pairs_begin[f+1])
-  FlatMap<char> pair_at;                    // pack(pair id, frame)
+  std::vector<std::uint32_t> pair_frames;   // frames of each pair id, increasing
+  std::vector<std::size_t> pair_frames_begin;
   std::vector<std::array<std::uint32_t, 3>> triples;  // listed triples, canonical
   FlatMap<std::uint32_t> triple_ids;        // pack(pair id of (a, b), c) -> triple id
   std::vector<std::uint32_t> frame_triples;
   std::vector<std::size_t> triples_begin;
-  FlatMap<char> triple_at;                  // pack(triple id, frame)
+  std::vector<std::uint32_t> triple_frames;
+  std::vector<std::size_t> triple_frames_begin;
+
+  // Is pair (triple) id listed in log frame f? Binary search in its frame list.
+  bool pair_listed(std::uint32_t pair, std::size_t f) const { return listed_in(pair_frames, pair_frames_begin, pair, f); }
+  bool triple_listed(std::uint32_t triple, std::size_t f) const {
+    return listed_in(triple_frames, triple_frames_begin, triple, f);
+  }
 
   Input() = default;
   Input(const Input&) = delete;  // `index` views into `names`
@@ -63,6 +72,15 @@ struct Input {
     return it == index.end() ? -1 : std::int64_t(it->second);
   }
   std::size_t vertex_count() const { return names.size(); }
+
+ private:
+  static bool listed_in(const std::vector<std::uint32_t>& frames, const std::vector<std::size_t>& begin,
+                        std::uint32_t id, std::size_t f) {
+    if (std::size_t(id) + 1 >= begin.size()) return false;
+    auto first = frames.begin() + static_cast<std::ptrdiff_t>(begin[id]);
+    auto last = frames.begin() + static_cast<std::ptrdiff_t>(begin[id + 1]);
+    return std::binary_search(first, last, static_cast<std::uint32_t>(f));
+  }
 };
 
 // Validates `doc` as a scenario or contact log. Throws Unreadable("INPUT <pointer>: ...").

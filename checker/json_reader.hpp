@@ -66,6 +66,7 @@ class Document {
  private:
   friend class Ref;
   friend class Builder;
+  friend Document parse(std::string_view bytes, const std::string& label);
   std::vector<Node> nodes_;
   std::vector<std::uint32_t> kids_;  // objects: key node, value node, key node, ...
   std::string text_;

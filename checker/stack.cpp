@@ -59,7 +59,7 @@ const Point& Stack::position(std::uint32_t v, std::uint32_t k) {
 bool Stack::edge_present(std::uint32_t a, std::uint32_t b, std::uint32_t k) {
   if (!positional()) {
     std::uint32_t id = in_.pairs.find(a, b);
-    return id != PairTable::kNone && in_.pair_at.contains(pack(id, static_cast<std::uint32_t>(log_start_ + k)));
+    return id != PairTable::kNone && in_.pair_listed(id, log_start_ + k);
   }
   std::uint64_t key = pack(pair_id(a, b), k);
   if (const char* known = edge_memo_.find(key)) return *known == 1;
@@ -69,12 +69,11 @@ bool Stack::edge_present(std::uint32_t a, std::uint32_t b, std::uint32_t k) {
 }
 
 bool Stack::triangle_present(std::uint32_t a, std::uint32_t b, std::uint32_t c, std::uint32_t k) {
-  const std::uint32_t frame = static_cast<std::uint32_t>(log_start_ + k);
   if (!in_.listed) return edge_present(a, b, k) && edge_present(a, c, k) && edge_present(b, c, k);
   std::uint32_t ab = in_.pairs.find(a, b);
   if (ab == PairTable::kNone) return false;
   const std::uint32_t* id = in_.triple_ids.find(pack(ab, c));
-  return id && in_.triple_at.contains(pack(*id, frame));
+  return id && in_.triple_listed(*id, log_start_ + k);
 }
 
 void Stack::graph_triangles(const std::vector<std::uint32_t>& edges,

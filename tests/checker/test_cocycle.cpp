@@ -88,6 +88,14 @@ TEST_CASE("tampered cocycles are rejected", "[cocycle]") {
   CHECK_THAT(rejected(kRing4, cert), Contains("REJECTED: /winding: key not allowed with method \"cocycle\""));
 }
 
+TEST_CASE("cocycle sums that overflow 64 bits are redone exactly", "[cocycle]") {
+  // prism [F0,F1]: phi V(F1) - phi V(F0) - phi E(F0,F1,1) + phi E(F0,F1,0)
+  //              = 0 + 6e18 - 0 + 6e18 = 1.2e19, beyond int64: the exact path reports it.
+  CHECK_THAT(rejected(kRing4, ring4(R"([[0, "F0", "F1", "6000000000000000000"]])", R"([[0, "F0", "-6000000000000000000"]])",
+                                    "6000000000000000000")),
+             Contains("REJECTED: /edges/0 prism [F0,F1] over slab 0 (t=0..1): phi(boundary) = 12000000000000000000"));
+}
+
 TEST_CASE("the checker enumerates triangles itself", "[cocycle]") {
   // Listed triple [F0,F1,F2]: phi(d[F0,F1,F2]) = phi E(F1,F2) - phi E(F0,F2) + phi E(F0,F1) = 1.
   const std::string log3 = R"({"format": "sweepcert-contacts-1", "fence": ["F0", "F1", "F2"], "triangles": "listed",

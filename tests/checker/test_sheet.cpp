@@ -97,6 +97,33 @@ TEST_CASE("a single triangle on a three-sensor fence is a sheet", "[sheet]") {
   accepted(kLog3, sheet3(R"([[0, "F0", "F1", "F2", "1"]])", "1", "z", R"(["0", 1])"));
 }
 
+TEST_CASE("64-bit overflow falls back to exact integers", "[sheet]") {
+  // c = 6e18 on [F0,F1,F2] at 0 and on the prism [F0,F1] over slab 0: E(F0,F1,0) gets
+  // c + c = 1.2e19 > 2^63 - 1, so the fast path overflows and the exact path takes over.
+  // Boundary: E(F0,F1,0) 2c, E(F1,F2,0) c, E(F2,F0,0) c, E(F0,F1,1) -c, V(F1,0) c, V(F0,0) -c,
+  // all on the fence cylinder; windings 2c - c = c, c, c.
+  const std::string c = "6000000000000000000";
+  accepted(kLog3, certificate("sheet", "sweepcert-contacts-1", "z", R"(["0", "1"])",
+                              R"("winding": ")" + c + R"(", "triangles": [[0, "F0", "F1", "F2", ")" + c +
+                                  R"("]], "prisms": [[0, "F0", "F1", ")" + c + R"("]])"));
+  CHECK_THAT(rejected(kLog3, certificate("sheet", "sweepcert-contacts-1", "z", R"(["0", "1"])",
+                                         R"("winding": "1", "triangles": [[0, "F0", "F1", "F2", ")" + c +
+                                             R"("]], "prisms": [[0, "F0", "F1", ")" + c + R"("]])")),
+             Contains("winds 6000000000000000000 times along this fence edge, not 1"));
+}
+
+TEST_CASE("from-pairs logs: a triangle exists when its three pairs do", "[sheet]") {
+  std::string fp = R"({"format": "sweepcert-contacts-1", "fence": ["F0", "F1", "F2"],
+    "triangles": {"from-pairs": {"contact-range": "1", "sensing-radius": "1"}},
+    "frames": [{"t": "0", "pairs": [["F0", "F1"], ["F1", "F2"], ["F2", "F0"]]}]})";
+  accepted(fp, sheet3(R"([[0, "F0", "F1", "F2", "1"]])"));
+  std::string four = R"({"format": "sweepcert-contacts-1", "fence": ["F0", "F1", "F2", "F3"],
+    "triangles": {"from-pairs": {"contact-range": "1", "sensing-radius": "1"}},
+    "frames": [{"t": "0", "pairs": [["F0", "F1"], ["F1", "F2"], ["F2", "F3"], ["F3", "F0"]]}]})";
+  CHECK_THAT(rejected(four, sheet3(R"([[0, "F0", "F1", "F2", "1"]])")),
+             Contains("REJECTED: /triangles/0 triangle [F0,F1,F2] at frame 0 (t=0): the three sensors are not pairwise in contact"));
+}
+
 TEST_CASE("the fence orientation decides the sign of the winding", "[sheet][orientation]") {
   // Listed F0, F2, F1 the fence loop is E(F0,F2) + E(F2,F1) + E(F1,F0) = -d[F0,F1,F2].
   std::string reversed = kLog3;
