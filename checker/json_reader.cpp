@@ -212,19 +212,32 @@ std::string pointer_token(std::string_view key) {
 }
 
 std::string find_duplicate_key(Ref value, const std::string& base) {
-  // Explicit stack of (value, pointer); depth is at most kMaxDepth by construction.
-  std::vector<std::pair<Ref, std::string>> todo{{value, base}};
-  while (!todo.empty()) {
-    auto [v, ptr] = todo.back();
-    todo.pop_back();
-    if (v.is(Kind::Object)) {
-      std::unordered_set<std::string_view> seen;
-      for (std::size_t i = 0; i < v.size(); ++i)
-        if (!seen.insert(v.key(i)).second) return ptr + "/" + pointer_token(v.key(i));
-      for (std::size_t i = v.size(); i-- > 0;) todo.emplace_back(v.value(i), ptr + "/" + pointer_token(v.key(i)));
-    } else if (v.is(Kind::Array)) {
-      for (std::size_t i = v.size(); i-- > 0;) todo.emplace_back(v[i], ptr + "/" + std::to_string(i));
+  // Depth-first with an explicit stack of (container, next child): its height is at most
+  // kMaxDepth, and a pointer is only spelled out for the duplicate found.
+  struct Level { Ref container; std::size_t next; };
+  std::vector<Level> path{{value, 0}};
+  auto pointer = [&](std::string_view last) {
+    std::string p = base;
+    for (std::size_t i = 0; i + 1 < path.size(); ++i) {
+      const Level& l = path[i];
+      std::size_t child = l.next - 1;
+      p += "/" + (l.container.is(Kind::Object) ? pointer_token(l.container.key(child)) : std::to_string(child));
     }
+    return p + "/" + pointer_token(last);
+  };
+  while (!path.empty()) {
+    Level& top = path.back();
+    Ref c = top.container;
+    if (!c.is(Kind::Object) && !c.is(Kind::Array)) { path.pop_back(); continue; }
+    if (top.next == 0 && c.is(Kind::Object)) {
+      std::unordered_set<std::string_view> seen;
+      for (std::size_t i = 0; i < c.size(); ++i)
+        if (!seen.insert(c.key(i)).second) return pointer(c.key(i));
+    }
+    if (top.next == c.size()) { path.pop_back(); continue; }
+    Ref child = c.is(Kind::Object) ? c.value(top.next) : c[top.next];
+    ++top.next;
+    if (child.is(Kind::Object) || child.is(Kind::Array)) path.push_back({child, 0});
   }
   return "";
 }
