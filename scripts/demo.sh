@@ -3,7 +3,7 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 bash scripts/install-deps.sh
-bash scripts/build.sh release
+bash scripts/build.sh release sweepcert sweepcheck
 bin=build/release
 mkdir -p build/demo
 echo
