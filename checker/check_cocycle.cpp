@@ -1,5 +1,6 @@
 // Cocycle certificates (schema/README.md §4.4): a 1-cochain phi with delta(phi) = 0 on every
 // 2-cell of the stack and phi(L_0) != 0, proving that no sheet exists on these frames.
+#include <algorithm>
 #include <sstream>
 
 #include "certificate.hpp"
@@ -13,6 +14,7 @@ using json::Ref;
 struct Entry {
   int sign;  // row orientation = sign * canonical orientation
   Value value;
+  std::uint64_t key;  // the cell: pack(pair id, frame) for an edge, pack(vertex, slab) for a vertical
 };
 
 struct Cochain {
@@ -20,6 +22,8 @@ struct Cochain {
   FlatMap<std::uint32_t> edges;      // pack(pair id, k) -> edge row
   FlatMap<std::uint32_t> verticals;  // pack(vertex, k) -> vertical row
 };
+
+constexpr std::uint64_t kVerticalRow = std::uint64_t(1) << 40;  // row numbers: edges, then verticals
 
 // phi on canonical cells, and the row defining it (rows are ordered edges first, then
 // verticals; ~0 when phi is 0 there).
@@ -37,45 +41,89 @@ struct Phi {
     return e.sign < 0 ? V(-x) : x;
   }
   V edge(std::uint64_t key) { return at(c.edges, c.edge_rows, key, 0); }
-  V vertical(std::uint64_t key) { return at(c.verticals, c.vertical_rows, key, std::uint64_t(1) << 40); }
+  V vertical(std::uint64_t key) { return at(c.verticals, c.vertical_rows, key, kVerticalRow); }
 };
 
 std::string row_pointer(std::uint64_t row) {
-  if (row >> 40) return "/verticals/" + std::to_string(row & ((std::uint64_t(1) << 40) - 1));
+  if (row >= kVerticalRow) return "/verticals/" + std::to_string(row - kVerticalRow);
   return "/edges/" + std::to_string(row);
 }
 
 template <class V>
 bool nonzero(const V& x, Ring ring) { return ring == Ring::Z ? x != 0 : (x % 2) != 0; }
 
+// phi(boundary of cell), by §3.2; then phi.first_row is the first row (edges before verticals)
+// listing a face of the cell.
+template <class V>
+V boundary_value(const TwoCell& cell, Stack& stack, Phi<V>& phi) {
+  const std::uint32_t a = cell.v[0], b = cell.v[1], k = cell.k;
+  if (cell.prism) {  // phi(V(b,k)) - phi(V(a,k)) - phi(E(a,b,k+1)) + phi(E(a,b,k))
+    const std::uint32_t ab = stack.pair_id(a, b);
+    return phi.vertical(pack(b, k)) - phi.vertical(pack(a, k)) - phi.edge(pack(ab, k + 1)) + phi.edge(pack(ab, k));
+  }
+  const std::uint32_t c = cell.v[2];  // phi(E(b,c)) - phi(E(a,c)) + phi(E(a,b))
+  return phi.edge(pack(stack.pair_id(b, c), k)) - phi.edge(pack(stack.pair_id(a, c), k)) +
+         phi.edge(pack(stack.pair_id(a, b), k));
+}
+
 // Rules 2 and 3 with values of type V: Checked64, or Int when a value does not fit 64 bits or a
 // Checked64 sum overflowed.
+//
+// Rule 2 asks phi(boundary of sigma) = 0 for every 2-cell sigma of the stack. That value is a
+// signed sum of phi over the faces of sigma, and phi is 0 on every 1-cell that no row lists
+// (its support). So a 2-cell with no face in the support passes trivially, and only the
+// 2-cells incident to a listed 1-cell need evaluating. Each of those is found from a listed
+// face f (Stack::cells_on_edge, cells_on_vertical), enumerated from INPUT:
+// - f = E(a,b,k): a triangle {a,b,c} at k (its pairs {a,c} and {b,c} are present at k, so c is
+//   a common neighbour of a and b at k), or the prism of [a,b] over slab k-1 or k;
+// - f = V(v,k): the prism over slab k of an edge {u,v} present at k and k+1 (u a neighbour of
+//   v at k).
+// The work is thus bounded by the support and its neighbourhood, not the size of the stack. A
+// cell with several listed faces is evaluated once per such face. The cell reported is the
+// first failing one in the visiting order of NOTES.md reading 10 (visited_before), whatever the
+// order in which cells are found.
 template <class V>
 std::string evaluate(const Cochain& c, const Values& values, Stack& stack, Ring ring, const Int& fence_value,
                      std::ostream& out) {
+  // The listed cells, frame by frame: the adjacency of a log frame is built once.
+  std::vector<std::pair<std::uint32_t, std::uint64_t>> listed;  // (frame or slab, row number)
+  listed.reserve(c.edge_rows.size() + c.vertical_rows.size());
+  for (std::size_t i = 0; i < c.edge_rows.size(); ++i)
+    listed.emplace_back(static_cast<std::uint32_t>(c.edge_rows[i].key), i);
+  for (std::size_t i = 0; i < c.vertical_rows.size(); ++i)
+    listed.emplace_back(static_cast<std::uint32_t>(c.vertical_rows[i].key), kVerticalRow + i);
+  std::sort(listed.begin(), listed.end());
+
   std::size_t triangles = 0, prisms = 0;
-  stack.for_each_two_cell([&](const TwoCell& cell) {
-    Phi<V> phi{c, values};
-    const std::uint32_t a = cell.v[0], b = cell.v[1], k = cell.k;
-    V d;
-    if (cell.prism) {  // phi(V(b,k)) - phi(V(a,k)) - phi(E(a,b,k+1)) + phi(E(a,b,k))
-      const std::uint32_t ab = stack.pair_id(a, b);
-      d = phi.vertical(pack(b, k)) - phi.vertical(pack(a, k)) - phi.edge(pack(ab, k + 1)) + phi.edge(pack(ab, k));
-      ++prisms;
-    } else {  // phi(E(b,c)) - phi(E(a,c)) + phi(E(a,b))
-      const std::uint32_t cc = cell.v[2];
-      d = phi.edge(pack(stack.pair_id(b, cc), k)) - phi.edge(pack(stack.pair_id(a, cc), k)) +
-          phi.edge(pack(stack.pair_id(a, b), k));
-      ++triangles;
+  std::vector<TwoCell> around;
+  bool failed = false;
+  TwoCell first_failure;
+  for (const auto& [k, row] : listed) {
+    if (row >= kVerticalRow) {
+      stack.cells_on_vertical(static_cast<std::uint32_t>(c.vertical_rows[row - kVerticalRow].key >> 32), k, around);
+    } else {
+      auto [a, b] = stack.pair_ends(static_cast<std::uint32_t>(c.edge_rows[row].key >> 32));
+      stack.cells_on_edge(a, b, k, around);
     }
-    if (nonzero(d, ring))  // a nonzero sum needs a nonzero phi, so first_row names a row
-      throw Rejected(row_pointer(phi.first_row), stack.cell_text(cell),
-                     "phi(boundary) = " + d.str() + (ring == Ring::Z2 ? " (odd)" : "") +
-                         ", but a cocycle must vanish on every 2-cell (rule 4.4.2; the row named is one on its boundary)");
-    return true;
-  });
-  out << "coboundary: phi vanishes on all " << triangles << " triangles and " << prisms
-      << " prisms of the stack, enumerated from INPUT (rule 2)\n";
+    for (const TwoCell& cell : around) {
+      Phi<V> phi{c, values};
+      ++(cell.prism ? prisms : triangles);
+      if (nonzero(boundary_value(cell, stack, phi), ring) && (!failed || visited_before(cell, first_failure))) {
+        failed = true;
+        first_failure = cell;
+      }
+    }
+  }
+  if (failed) {  // a nonzero sum needs a nonzero phi, so first_row names a row
+    Phi<V> phi{c, values};
+    const V d = boundary_value(first_failure, stack, phi);
+    throw Rejected(row_pointer(phi.first_row), stack.cell_text(first_failure),
+                   "phi(boundary) = " + d.str() + (ring == Ring::Z2 ? " (odd)" : "") +
+                       ", but a cocycle must vanish on every 2-cell (rule 4.4.2; the row named is one on its boundary)");
+  }
+  out << "coboundary: phi vanishes on the " << triangles << " triangles and " << prisms
+      << " prisms incident to its support, enumerated from INPUT (once per listed face); the other 2-cells have no "
+         "face where phi is nonzero (rule 2)\n";
   Phi<V> phi{c, values};
   V loop(0);
   for (std::size_t i = 0; i < stack.fence_size(); ++i) {
@@ -120,9 +168,10 @@ std::string check_cocycle(const Certificate& cert, Stack& stack, std::ostream& o
     std::uint32_t v[2] = {read_sensor(row[1], w.at(1), in), read_sensor(row[2], w.at(2), in)};
     if (v[0] == v[1]) throw Rejected(w.at(2).str(), "sensor \"" + stack.name(v[0]) + "\"", "repeated in one cell (rule 4.4.1)");
     const std::string item = "edge [" + stack.name(v[0]) + "," + stack.name(v[1]) + "] at " + stack.frame_text(k);
-    Entry e{canonical_order(v, 2), values.read(row[3], w.at(3), ring, "rule 4.4.1")};
+    Entry e{canonical_order(v, 2), values.read(row[3], w.at(3), ring, "rule 4.4.1"), 0};
     if (!stack.edge_present(v[0], v[1], k)) throw Rejected(w.str(), item, "the edge is not present at this frame (rule 4.4.1)");
-    auto [first, fresh] = c.edges.insert(pack(stack.pair_id(v[0], v[1]), k), static_cast<std::uint32_t>(i));
+    e.key = pack(stack.pair_id(v[0], v[1]), k);
+    auto [first, fresh] = c.edges.insert(e.key, static_cast<std::uint32_t>(i));
     if (!fresh) throw Rejected(w.str(), item, "the cell appears twice (also /edges/" + std::to_string(*first) + ", rule 4.4.1)");
     c.edge_rows.push_back(e);
   }
@@ -134,8 +183,8 @@ std::string check_cocycle(const Certificate& cert, Stack& stack, std::ostream& o
     expect_row(row, w, 3, "[k, v, value]");
     const std::uint32_t k = read_index(row[0], w.at(0), n, "slab");
     const std::uint32_t v = read_sensor(row[1], w.at(1), in);
-    Entry e{1, values.read(row[2], w.at(2), ring, "rule 4.4.1")};
-    auto [first, fresh] = c.verticals.insert(pack(v, k), static_cast<std::uint32_t>(i));
+    Entry e{1, values.read(row[2], w.at(2), ring, "rule 4.4.1"), pack(v, k)};
+    auto [first, fresh] = c.verticals.insert(e.key, static_cast<std::uint32_t>(i));
     if (!fresh)
       throw Rejected(w.str(), "vertical V(" + stack.name(v) + ") over " + stack.slab_text(k),
                      "the cell appears twice (also /verticals/" + std::to_string(*first) + ", rule 4.4.1)");

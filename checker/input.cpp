@@ -72,16 +72,22 @@ void check_fence_polygon(const Input& in) {
     }
 }
 
-// From the ids listed frame by frame, the frames listing each id (increasing): a counting sort.
+// From the ids listed frame by frame, the frames listing each id (increasing) and the slot of
+// each listing: a counting sort.
 void invert(const std::vector<std::uint32_t>& by_frame, const std::vector<std::size_t>& frame_begin, std::size_t ids,
-            std::vector<std::uint32_t>& frames, std::vector<std::size_t>& begin) {
+            std::vector<std::uint32_t>& frames, std::vector<std::size_t>& slots, std::vector<std::size_t>& begin) {
   begin.assign(ids + 1, 0);
   for (std::uint32_t id : by_frame) ++begin[id + 1];
   for (std::size_t i = 0; i < ids; ++i) begin[i + 1] += begin[i];
   std::vector<std::size_t> next(begin.begin(), begin.end() - 1);
   frames.resize(by_frame.size());
+  slots.resize(by_frame.size());
   for (std::size_t f = 0; f + 1 < frame_begin.size(); ++f)
-    for (std::size_t i = frame_begin[f]; i < frame_begin[f + 1]; ++i) frames[next[by_frame[i]]++] = static_cast<std::uint32_t>(f);
+    for (std::size_t i = frame_begin[f]; i < frame_begin[f + 1]; ++i) {
+      const std::size_t j = next[by_frame[i]]++;
+      frames[j] = static_cast<std::uint32_t>(f);
+      slots[j] = i;
+    }
 }
 
 void load_scenario(const Members& root, Input& in) {
@@ -287,8 +293,9 @@ void load_contact_log(const Members& root, Input& in) {
   }
   in.pairs_begin.push_back(in.frame_pairs.size());
   in.triples_begin.push_back(in.frame_triples.size());
-  invert(in.frame_pairs, in.pairs_begin, in.pairs.size(), in.pair_frames, in.pair_frames_begin);
-  invert(in.frame_triples, in.triples_begin, in.triples.size(), in.triple_frames, in.triple_frames_begin);
+  invert(in.frame_pairs, in.pairs_begin, in.pairs.size(), in.pair_frames, in.pair_slots, in.pair_frames_begin);
+  invert(in.frame_triples, in.triples_begin, in.triples.size(), in.triple_frames, in.triple_slots,
+         in.triple_frames_begin);
 }
 
 }  // namespace

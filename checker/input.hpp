@@ -48,19 +48,26 @@ struct Input {
   std::vector<std::uint32_t> frame_pairs;   // pair ids, frame by frame
   std::vector<std::size_t> pairs_begin;     // frame f's pairs: [pairs_begin[f], pairs_begin[f+1])
   std::vector<std::uint32_t> pair_frames;   // frames of each pair id, increasing
+  std::vector<std::size_t> pair_slots;      // ... and where it is listed there (index in frame_pairs)
   std::vector<std::size_t> pair_frames_begin;
   std::vector<std::array<std::uint32_t, 3>> triples;  // listed triples, canonical
   FlatMap<std::uint32_t> triple_ids;        // pack(pair id of (a, b), c) -> triple id
   std::vector<std::uint32_t> frame_triples;
   std::vector<std::size_t> triples_begin;
   std::vector<std::uint32_t> triple_frames;
+  std::vector<std::size_t> triple_slots;
   std::vector<std::size_t> triple_frames_begin;
 
-  // Is pair (triple) id listed in log frame f? Binary search in its frame list.
-  bool pair_listed(std::uint32_t pair, std::size_t f) const { return listed_in(pair_frames, pair_frames_begin, pair, f); }
-  bool triple_listed(std::uint32_t triple, std::size_t f) const {
-    return listed_in(triple_frames, triple_frames_begin, triple, f);
+  // Where pair (triple) id is listed in log frame f: its index in frame_pairs (frame_triples),
+  // which orders the listings frame by frame in log order; kAbsent if it is not listed there.
+  static constexpr std::size_t kAbsent = ~std::size_t(0);
+  std::size_t pair_slot(std::uint32_t pair, std::size_t f) const {
+    return slot_in(pair_frames, pair_slots, pair_frames_begin, pair, f);
   }
+  std::size_t triple_slot(std::uint32_t triple, std::size_t f) const {
+    return slot_in(triple_frames, triple_slots, triple_frames_begin, triple, f);
+  }
+  bool pair_listed(std::uint32_t pair, std::size_t f) const { return pair_slot(pair, f) != kAbsent; }
 
   Input() = default;
   Input(const Input&) = delete;  // `index` views into `names`
@@ -74,12 +81,14 @@ struct Input {
   std::size_t vertex_count() const { return names.size(); }
 
  private:
-  static bool listed_in(const std::vector<std::uint32_t>& frames, const std::vector<std::size_t>& begin,
-                        std::uint32_t id, std::size_t f) {
-    if (std::size_t(id) + 1 >= begin.size()) return false;
+  // Binary search for frame f in the id's increasing frame list.
+  static std::size_t slot_in(const std::vector<std::uint32_t>& frames, const std::vector<std::size_t>& slots,
+                             const std::vector<std::size_t>& begin, std::uint32_t id, std::size_t f) {
+    if (std::size_t(id) + 1 >= begin.size()) return kAbsent;
     auto first = frames.begin() + static_cast<std::ptrdiff_t>(begin[id]);
     auto last = frames.begin() + static_cast<std::ptrdiff_t>(begin[id + 1]);
-    return std::binary_search(first, last, static_cast<std::uint32_t>(f));
+    auto it = std::lower_bound(first, last, f);
+    return it != last && *it == f ? slots[static_cast<std::size_t>(it - frames.begin())] : kAbsent;
   }
 };
 

@@ -25,9 +25,8 @@ Stack::Stack(Input& in, std::vector<Rat> frames, std::size_t log_start)
     fence_signs_.push_back(sign);
     fence_index_.insert(id, static_cast<std::uint32_t>(i));
   }
-  degree_.assign(in_.vertex_count(), 0);
-  out_begin_.assign(in_.vertex_count(), 0);
-  out_end_.assign(in_.vertex_count(), 0);
+  begin_.assign(in_.vertex_count(), 0);
+  end_.assign(in_.vertex_count(), 0);
   mark_.assign(in_.vertex_count(), 0);
 }
 
@@ -68,107 +67,94 @@ bool Stack::edge_present(std::uint32_t a, std::uint32_t b, std::uint32_t k) {
   return present;
 }
 
+std::size_t Stack::triple_slot(std::uint32_t a, std::uint32_t b, std::uint32_t c, std::uint32_t k) const {
+  std::uint32_t ab = in_.pairs.find(a, b);
+  if (ab == PairTable::kNone) return Input::kAbsent;
+  const std::uint32_t* id = in_.triple_ids.find(pack(ab, c));
+  return id ? in_.triple_slot(*id, log_start_ + k) : Input::kAbsent;
+}
+
 bool Stack::triangle_present(std::uint32_t a, std::uint32_t b, std::uint32_t c, std::uint32_t k) {
   if (!in_.listed) return edge_present(a, b, k) && edge_present(a, c, k) && edge_present(b, c, k);
-  std::uint32_t ab = in_.pairs.find(a, b);
-  if (ab == PairTable::kNone) return false;
-  const std::uint32_t* id = in_.triple_ids.find(pack(ab, c));
-  return id && in_.triple_listed(*id, log_start_ + k);
+  return triple_slot(a, b, c, k) != Input::kAbsent;
 }
 
-void Stack::graph_triangles(const std::vector<std::uint32_t>& edges,
-                            const std::function<void(std::uint32_t, std::uint32_t, std::uint32_t)>& f) {
-  std::vector<std::uint32_t> touched;
-  for (std::uint32_t id : edges) {
-    auto [a, b] = in_.pairs.ends(id);
-    if (degree_[a]++ == 0) touched.push_back(a);
-    if (degree_[b]++ == 0) touched.push_back(b);
+void Stack::build_adjacency(std::uint32_t k) {
+  // A counting sort of frame k's pairs by end, over the vertices they touch only.
+  for (std::uint32_t v : touched_) begin_[v] = end_[v] = 0;
+  touched_.clear();
+  const std::size_t f = log_start_ + k;
+  const std::uint32_t* first = in_.frame_pairs.data() + in_.pairs_begin[f];
+  const std::uint32_t* last = in_.frame_pairs.data() + in_.pairs_begin[f + 1];
+  for (const std::uint32_t* p = first; p != last; ++p) {
+    auto [a, b] = in_.pairs.ends(*p);
+    if (end_[a]++ == 0) touched_.push_back(a);  // end_ counts the degree for now
+    if (end_[b]++ == 0) touched_.push_back(b);
   }
-  // Orient every edge from its lower (degree, index) end: each vertex then has at most
-  // O(sqrt(E)) out-neighbours of higher rank, and each triangle is found exactly once.
-  auto lower = [&](std::uint32_t u, std::uint32_t v) {
-    return degree_[u] < degree_[v] || (degree_[u] == degree_[v] && u < v);
-  };
-  std::vector<std::pair<std::uint32_t, std::uint32_t>> arcs;
-  arcs.reserve(edges.size());
-  for (std::uint32_t id : edges) {
-    auto [a, b] = in_.pairs.ends(id);
-    arcs.push_back(lower(a, b) ? std::make_pair(a, b) : std::make_pair(b, a));
+  std::uint32_t next = 0;
+  for (std::uint32_t v : touched_) {
+    const std::uint32_t degree = end_[v];
+    begin_[v] = end_[v] = next;
+    next += degree;
   }
-  std::sort(arcs.begin(), arcs.end());
-  for (std::size_t i = 0; i < arcs.size(); ++i) {
-    if (i == 0 || arcs[i].first != arcs[i - 1].first) out_begin_[arcs[i].first] = static_cast<std::uint32_t>(i);
-    out_end_[arcs[i].first] = static_cast<std::uint32_t>(i + 1);
+  adjacency_.resize(next);
+  for (const std::uint32_t* p = first; p != last; ++p) {
+    auto [a, b] = in_.pairs.ends(*p);
+    adjacency_[end_[a]++] = b;
+    adjacency_[end_[b]++] = a;
   }
-  for (std::uint32_t u : touched) {
-    ++stamp_;
-    for (std::uint32_t i = out_begin_[u]; i < out_end_[u]; ++i) mark_[arcs[i].second] = stamp_;
-    for (std::uint32_t i = out_begin_[u]; i < out_end_[u]; ++i) {
-      std::uint32_t v = arcs[i].second;
-      for (std::uint32_t j = out_begin_[v]; j < out_end_[v]; ++j) {
-        std::uint32_t w = arcs[j].second;
-        if (mark_[w] != stamp_) continue;
-        std::uint32_t t[3] = {u, v, w};
-        canonical_order(t, 3);
-        f(t[0], t[1], t[2]);
-      }
-    }
-  }
-  for (std::uint32_t v : touched) degree_[v] = out_begin_[v] = out_end_[v] = 0;
+  adjacency_frame_ = k;
 }
 
-std::vector<std::uint32_t> Stack::positional_edges(std::uint32_t k) {
-  std::vector<std::uint32_t> edges;
-  const std::uint32_t n = static_cast<std::uint32_t>(in_.vertex_count());
-  for (std::uint32_t a = 0; a < n; ++a)
-    for (std::uint32_t b = a + 1; b < n; ++b)
-      if (edge_present(a, b, k)) edges.push_back(pair_id(a, b));
-  return edges;
+void Stack::neighbours(std::uint32_t v, std::uint32_t k, std::vector<std::uint32_t>& out) {
+  out.clear();
+  if (positional()) {
+    for (std::uint32_t u = 0; u < in_.vertex_count(); ++u)
+      if (u != v && edge_present(std::min(u, v), std::max(u, v), k)) out.push_back(u);
+    return;
+  }
+  if (k != adjacency_frame_) build_adjacency(k);
+  out.assign(adjacency_.begin() + begin_[v], adjacency_.begin() + end_[v]);
 }
 
-void Stack::for_each_two_cell(const std::function<bool(const TwoCell&)>& f) {
-  const std::uint32_t n = static_cast<std::uint32_t>(frames_.size() - 1);
-  std::vector<std::uint32_t> edges, next_edges;
-  if (positional()) edges = positional_edges(0);
-  for (std::uint32_t k = 0; k <= n; ++k) {
-    const std::size_t frame = log_start_ + k;
-    if (!positional()) edges.assign(in_.frame_pairs.begin() + static_cast<std::ptrdiff_t>(in_.pairs_begin[frame]),
-                                    in_.frame_pairs.begin() + static_cast<std::ptrdiff_t>(in_.pairs_begin[frame + 1]));
-    bool go = true;
-    if (!positional() && in_.listed) {
-      for (std::size_t i = in_.triples_begin[frame]; go && i < in_.triples_begin[frame + 1]; ++i) {
-        const auto& t = in_.triples[in_.frame_triples[i]];
-        TwoCell c{false, k, {t[0], t[1], t[2]}};
-        go = f(c);
-      }
-    } else {
-      // From-pairs logs: every triangle of the pair graph. Positional: the pair graph's
-      // triangles are the candidates; a triple is present iff the three disks share a point.
-      std::vector<TwoCell> cells;
-      graph_triangles(edges, [&](std::uint32_t a, std::uint32_t b, std::uint32_t c) {
-        if (positional()) {
-          const Point centres[3] = {position(a, k), position(b, k), position(c, k)};
-          const Rat radii[3] = {in_.sensors[a].radius, in_.sensors[b].radius, in_.sensors[c].radius};
-          if (!three_disks_meet(centres, radii)) return;
-        }
-        cells.push_back(TwoCell{false, k, {a, b, c}});
-      });
-      // Triangles in canonical order, so the first failure reported does not depend on hashing.
-      std::sort(cells.begin(), cells.end(), [](const TwoCell& x, const TwoCell& y) {
-        return std::lexicographical_compare(x.v, x.v + 3, y.v, y.v + 3);
-      });
-      for (std::size_t i = 0; go && i < cells.size(); ++i) go = f(cells[i]);
+void Stack::add_prism(std::uint32_t a, std::uint32_t b, std::uint32_t j, std::vector<TwoCell>& out) {
+  if (j + 1 >= frames_.size() || !edge_present(a, b, j) || !edge_present(a, b, j + 1)) return;
+  TwoCell cell{true, j, {a, b, 0}, {a, b, 0}};
+  if (!positional()) cell.pos = {in_.pair_slot(in_.pairs.find(a, b), log_start_ + j), 0, 0};
+  out.push_back(cell);
+}
+
+void Stack::cells_on_edge(std::uint32_t a, std::uint32_t b, std::uint32_t k, std::vector<TwoCell>& out) {
+  out.clear();
+  neighbours(a, k, around_a_);
+  neighbours(b, k, around_b_);
+  ++stamp_;
+  for (std::uint32_t u : around_a_) mark_[u] = stamp_;
+  for (std::uint32_t c : around_b_) {
+    if (mark_[c] != stamp_) continue;
+    std::uint32_t t[3] = {a, b, c};
+    canonical_order(t, 3);
+    TwoCell cell{false, k, {t[0], t[1], t[2]}, {t[0], t[1], t[2]}};
+    if (positional()) {
+      // Pairwise contact is necessary; the triple needs a common point of the three disks.
+      const Point centres[3] = {position(t[0], k), position(t[1], k), position(t[2], k)};
+      const Rat radii[3] = {in_.sensors[t[0]].radius, in_.sensors[t[1]].radius, in_.sensors[t[2]].radius};
+      if (!three_disks_meet(centres, radii)) continue;
+    } else if (in_.listed) {
+      const std::size_t slot = triple_slot(t[0], t[1], t[2], k);
+      if (slot == Input::kAbsent) continue;
+      cell.pos = {slot, 0, 0};
     }
-    if (!go) return;
-    if (k == n) break;
-    if (positional()) next_edges = positional_edges(k + 1);
-    for (std::uint32_t id : edges) {
-      auto [a, b] = in_.pairs.ends(id);
-      if (!edge_present(a, b, k + 1)) continue;
-      if (!f(TwoCell{true, k, {a, b, 0}})) return;
-    }
-    if (positional()) edges.swap(next_edges);
+    out.push_back(cell);
   }
+  if (k > 0) add_prism(a, b, k - 1, out);
+  add_prism(a, b, k, out);
+}
+
+void Stack::cells_on_vertical(std::uint32_t v, std::uint32_t k, std::vector<TwoCell>& out) {
+  out.clear();
+  neighbours(v, k, around_a_);
+  for (std::uint32_t u : around_a_) add_prism(std::min(u, v), std::max(u, v), k, out);
 }
 
 std::string Stack::frame_text(std::uint32_t k) const {

@@ -1,11 +1,12 @@
 // The stack complex on a certificate's frames (schema/README.md §3): which cells exist, their
-// canonical orientation, the fence cylinder, and the enumeration of all 2-cells used by the
+// canonical orientation, the fence cylinder, and the 2-cells around a given 1-cell used by the
 // cocycle check.
 #pragma once
 #include <cstdint>
+#include <array>
 #include <deque>
-#include <functional>
 #include <string>
+#include <tuple>
 #include <vector>
 
 #include "input.hpp"
@@ -17,12 +18,20 @@ namespace sweepcheck {
 int canonical_order(std::uint32_t* v, int n);
 
 // A 2-cell in canonical orientation: a triangle [v0, v1, v2] at frame k, or the prism of the
-// edge [v0, v1] over slab k.
+// edge [v0, v1] over slab k. `pos` places it among the triangles at k (or the prisms over slab
+// k) in the visiting order of NOTES.md reading 10: the slot of its listed triple (of its pair
+// at frame k) in a contact log, otherwise its canonical ids.
 struct TwoCell {
   bool prism = false;
   std::uint32_t k = 0;
   std::uint32_t v[3] = {0, 0, 0};
+  std::array<std::uint64_t, 3> pos{};
 };
+
+// The visiting order: frame by frame, the triangles at k before the prisms over slab k, then pos.
+inline bool visited_before(const TwoCell& x, const TwoCell& y) {
+  return std::tie(x.k, x.prism, x.pos) < std::tie(y.k, y.prism, y.pos);
+}
 
 class Stack {
  public:
@@ -52,9 +61,15 @@ class Stack {
   std::uint32_t fence_pair(std::size_t i) const { return fence_pairs_.at(i); }
   std::size_t fence_size() const { return in_.fence.size(); }
 
-  // Calls f on every 2-cell of the stack: at each frame k the triangles present at k, then the
-  // prisms over slab k. Stops early when f returns false.
-  void for_each_two_cell(const std::function<bool(const TwoCell&)>& f);
+  // The 2-cells whose boundary contains a given 1-cell, each present cell once, into `out`:
+  // - the edge [a, b] at frame k (present, a < b): the triangles {a, b, c} present at k, found
+  //   among the common neighbours c of a and b at k (the three pairs of a triangle are present
+  //   with it), and the prisms of [a, b] over slabs k - 1 and k when it is present at both ends;
+  // - the vertical V(v, k), k < n: the prisms over slab k of the edges {u, v} present at k and
+  //   at k + 1, found among the neighbours u of v at k.
+  // A contact log's adjacency is built per frame on demand: visit the cells frame by frame.
+  void cells_on_edge(std::uint32_t a, std::uint32_t b, std::uint32_t k, std::vector<TwoCell>& out);
+  void cells_on_vertical(std::uint32_t v, std::uint32_t k, std::vector<TwoCell>& out);
 
   // For messages.
   std::string name(std::uint32_t v) const { return in_.names.at(v); }
@@ -63,11 +78,14 @@ class Stack {
   std::string cell_text(const TwoCell& c) const;
 
  private:
-  // Calls f(a, b, c) for every triangle of the graph with these edges (pair ids), each once,
-  // in canonical order. Degree ordering bounds the work by O(E^1.5).
-  void graph_triangles(const std::vector<std::uint32_t>& edges,
-                       const std::function<void(std::uint32_t, std::uint32_t, std::uint32_t)>& f);
-  std::vector<std::uint32_t> positional_edges(std::uint32_t k);
+  // The sensors in contact with v at frame k, into `out`. Contact log: from the adjacency of
+  // frame k (rebuilt when k changes). Positional: every other sensor is tested exactly.
+  void neighbours(std::uint32_t v, std::uint32_t k, std::vector<std::uint32_t>& out);
+  void build_adjacency(std::uint32_t k);
+  // Listed logs: the slot of the triple a < b < c listed at frame k, or Input::kAbsent.
+  std::size_t triple_slot(std::uint32_t a, std::uint32_t b, std::uint32_t c, std::uint32_t k) const;
+  // Appends the prism of [a, b] over slab j when [a, b] is present at j and j + 1.
+  void add_prism(std::uint32_t a, std::uint32_t b, std::uint32_t j, std::vector<TwoCell>& out);
 
   Input& in_;
   std::vector<Rat> frames_;
@@ -78,8 +96,12 @@ class Stack {
   FlatMap<char> edge_memo_;             // positional: pack(pair, k) -> 1 present, 2 absent
   FlatMap<std::uint32_t> position_index_;
   std::deque<Point> positions_;
-  // Work space of graph_triangles, indexed by vertex.
-  std::vector<std::uint32_t> degree_, out_begin_, out_end_;
+  // Adjacency of log frame adjacency_frame_: the neighbours of v are adjacency_[begin_[v],
+  // end_[v]); only the vertices in `touched_` have a nonempty range.
+  std::uint32_t adjacency_frame_ = ~std::uint32_t(0);
+  std::vector<std::uint32_t> adjacency_, begin_, end_, touched_;
+  // Work space of cells_on_edge; mark_ is indexed by vertex.
+  std::vector<std::uint32_t> around_a_, around_b_;
   std::vector<std::uint64_t> mark_;
   std::uint64_t stamp_ = 0;
 };

@@ -136,3 +136,37 @@ TEST_CASE("positional cocycles: pairs and triples computed exactly", "[cocycle][
   CHECK_THAT(rejected(small, cocycle("sweepcert-scenario-1", R"(["0", "10"])", R"([[0, "D", "F2", "1"]])", "[]")),
              Contains("REJECTED: /edges/0 prism [D,F2] over slab 0 (t=0..10): phi(boundary) = 1"));
 }
+
+TEST_CASE("only the 2-cells incident to the support are evaluated", "[cocycle][incident]") {
+  // One frame: the fence square, a sensor X touching F0 and F1 (listed triple [F0,F1,X]) and,
+  // far from everything, a listed triangle [A,B,C] whose edges phi never lists.
+  const std::string log = R"({"format": "sweepcert-contacts-1", "fence": ["F0", "F1", "F2", "F3"], "triangles": "listed",
+    "frames": [{"t": "0", "pairs": [["F0", "F1"], ["F1", "F2"], ["F2", "F3"], ["F3", "F0"], ["F0", "X"], ["F1", "X"],
+                                    ["A", "B"], ["B", "C"], ["A", "C"]],
+                "triples": [["A", "B", "C"], ["F0", "F1", "X"]]}]})";
+  auto one_frame = [](const std::string& edges) { return cocycle("sweepcert-contacts-1", R"(["0"])", edges, "[]"); };
+  // Wrong only on [F0,F1,X], which has the listed face E(F0,F1): phi(d) = 0 - 0 + 1.
+  CHECK_THAT(rejected(log, one_frame(R"([[0, "F0", "F1", "1"]])")),
+             Contains("REJECTED: /edges/0 triangle [F0,F1,X] at frame 0 (t=0): phi(boundary) = 1"));
+  // Right: phi(E(F0,X)) = 1 as well gives 0 - 1 + 1 = 0. [A,B,C] exists but has no listed face,
+  // so it is not evaluated (its value is 0 anyway); [F0,F1,X] is met once per listed face.
+  Run r = accepted(log, one_frame(R"([[0, "F0", "F1", "1"], [0, "F0", "X", "1"]])"));
+  CHECK_THAT(r.out, Contains("phi vanishes on the 2 triangles and 0 prisms incident to its support"));
+  // A listed face on [A,B,C] makes it a candidate: phi(d[A,B,C]) = phi E(A,B) = 1.
+  CHECK_THAT(rejected(log, one_frame(R"([[0, "F0", "F1", "1"], [0, "F0", "X", "1"], [0, "A", "B", "1"]])")),
+             Contains("REJECTED: /edges/2 triangle [A,B,C] at frame 0 (t=0): phi(boundary) = 1"));
+}
+
+TEST_CASE("the first failing cell follows the visiting order, not the order found", "[cocycle][incident]") {
+  // Frame 0 lists [F1,F2] before [F0,F1], so the prism [F1,F2] over slab 0 is visited first,
+  // although it is found from a row at frame 1 and [F0,F1]'s from a row at frame 0.
+  const std::string log = R"({"format": "sweepcert-contacts-1", "fence": ["F0", "F1", "F2", "F3"], "triangles": "listed",
+    "frames": [{"t": "0", "pairs": [["F1", "F2"], ["F0", "F1"], ["F2", "F3"], ["F3", "F0"]], "triples": []},
+               {"t": "1", "pairs": [["F0", "F1"], ["F1", "F2"], ["F2", "F3"], ["F3", "F0"]], "triples": []}]})";
+  CHECK_THAT(rejected(log, ring4(R"([[1, "F1", "F2", "1"], [0, "F0", "F1", "1"]])", "[]")),
+             Contains("REJECTED: /edges/0 prism [F1,F2] over slab 0 (t=0..1): phi(boundary) = -1"));
+  // A vertical's prisms: V(F1, 0) lies on the prisms [F0,F1] and [F1,F2] over slab 0; the first
+  // visited is [F1,F2], where phi(d) = phi V(F2) - phi V(F1) = -1.
+  CHECK_THAT(rejected(log, ring4(R"([[0, "F0", "F1", "1"], [1, "F0", "F1", "1"]])", R"([[0, "F1", "1"]])")),
+             Contains("REJECTED: /verticals/0 prism [F1,F2] over slab 0 (t=0..1): phi(boundary) = -1"));
+}
