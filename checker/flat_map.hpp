@@ -4,6 +4,7 @@
 #pragma once
 #include <cstdint>
 #include <stdexcept>
+#include <string_view>
 #include <utility>
 #include <vector>
 
@@ -101,6 +102,41 @@ class PairTable {
  private:
   FlatMap<std::uint32_t> ids_;
   std::vector<std::pair<std::uint32_t, std::uint32_t>> ends_;
+};
+
+// Distinct strings numbered in order of insertion, by open addressing. The strings are views:
+// their bytes must outlive the index. Sensor ids are looked up millions of times, and
+// std::unordered_map's hashing, modulo and node per entry cost several times more.
+class StringIndex {
+ public:
+  static constexpr std::uint32_t kNone = ~std::uint32_t(0);
+  std::size_t size() const { return strings_.size(); }
+  std::string_view at(std::uint32_t n) const { return strings_.at(n); }
+  std::uint32_t find(std::string_view s) const { return slots_[slot(s)]; }
+  // The number of s, adding it if new; and whether it was new.
+  std::pair<std::uint32_t, bool> insert(std::string_view s) {
+    if (2 * (strings_.size() + 1) > slots_.size()) {
+      slots_.assign(2 * slots_.size(), kNone);
+      for (std::uint32_t n = 0; n < strings_.size(); ++n) slots_[slot(strings_[n])] = n;
+    }
+    std::uint32_t& n = slots_[slot(s)];
+    if (n != kNone) return {n, false};
+    n = static_cast<std::uint32_t>(strings_.size());
+    strings_.push_back(s);
+    return {n, true};
+  }
+
+ private:
+  // The slot holding s, or the empty slot where it would go (FNV-1a, linear probing).
+  std::size_t slot(std::string_view s) const {
+    std::uint64_t h = 0xcbf29ce484222325ULL;
+    for (unsigned char c : s) h = (h ^ c) * 0x100000001b3ULL;
+    std::size_t mask = slots_.size() - 1, i = (h ^ (h >> 32)) & mask;
+    while (slots_[i] != kNone && strings_[slots_[i]] != s) i = (i + 1) & mask;
+    return i;
+  }
+  std::vector<std::uint32_t> slots_ = std::vector<std::uint32_t>(16, kNone);
+  std::vector<std::string_view> strings_;
 };
 
 }  // namespace sweepcheck

@@ -23,8 +23,7 @@ void set_vertices(Input& in, std::vector<std::string> ids) {
   std::sort(ids.begin(), ids.end());  // std::string compares bytes as unsigned char
   ids.erase(std::unique(ids.begin(), ids.end()), ids.end());
   in.names = std::move(ids);
-  in.index.reserve(in.names.size());
-  for (std::size_t i = 0; i < in.names.size(); ++i) in.index.emplace(in.names[i], static_cast<std::uint32_t>(i));
+  for (const std::string& name : in.names) in.index.insert(name);
   in.is_fence.assign(in.names.size(), false);
 }
 
@@ -148,7 +147,7 @@ void load_scenario(const Members& root, Input& in) {
   set_vertices(in, ids);
   in.sensors.resize(in.names.size());
   for (std::size_t i = 0; i < all.size(); ++i) {
-    std::uint32_t v = in.index.at(all[i].id);
+    std::uint32_t v = static_cast<std::uint32_t>(in.find(all[i].id));
     in.sensors[v] = std::move(all[i].sensor);
     if (i < fence.size()) { in.fence.push_back(v); in.is_fence[v] = true; }
   }
@@ -159,21 +158,26 @@ void load_contact_log(const Members& root, Input& in) {
   in.kind = InputKind::ContactLog;
   if (auto title = root.get("title")) get_string(*title, root.at("title"));
 
-  std::unordered_map<std::string_view, std::string> declared;  // fence and sensors ids
+  // Every id, numbered in order of first appearance: the fence, `sensors`, then the frames.
+  StringIndex ids;
   Ref fence = root.need("fence");
   expect_array(fence, "/fence", 3);
+  const std::size_t fence_size = fence.size();
+  auto first_use = [&](std::uint32_t n) {  // the pointer of a declared id
+    return n < fence_size ? at("/fence", n) : at("/sensors", n - fence_size);
+  };
   for (std::size_t i = 0; i < fence.size(); ++i) {
     std::string_view id = get_id(fence[i], at("/fence", i));
-    auto [it, fresh] = declared.emplace(id, at("/fence", i));
-    if (!fresh) invalid(at("/fence", i), "duplicate fence id " + id_text(id) + " (also at " + it->second + ", §2.2)");
+    auto [n, fresh] = ids.insert(id);
+    if (!fresh) invalid(at("/fence", i), "duplicate fence id " + id_text(id) + " (also at " + first_use(n) + ", §2.2)");
   }
   auto sensors = root.get("sensors");
   if (sensors) {
     expect_array(*sensors, "/sensors", 0);
     for (std::size_t i = 0; i < sensors->size(); ++i) {
       std::string_view id = get_id((*sensors)[i], at("/sensors", i));
-      auto [it, fresh] = declared.emplace(id, at("/sensors", i));
-      if (!fresh) invalid(at("/sensors", i), "id " + id_text(id) + " already used at " + it->second + " (§2.2)");
+      auto [n, fresh] = ids.insert(id);
+      if (!fresh) invalid(at("/sensors", i), "id " + id_text(id) + " already used at " + first_use(n) + " (§2.2)");
     }
   }
 
@@ -191,19 +195,20 @@ void load_contact_log(const Members& root, Input& in) {
       invalid(t.at("from-pairs"), "3*R_s^2 < R_c^2: pairwise contacts do not imply triple contacts (§2.2)");
   }
 
-  // Pass 1: shapes, times and the vertex set. Pointers are only built for a message: a log
-  // may hold millions of pairs.
+  // Pass 1: shapes, times and the vertex set. Each id used in a pair or triple is looked up
+  // once, and its number kept in `uses` for pass 2. Pointers are only built for a message: a
+  // log may hold millions of pairs.
   Ref frames = root.need("frames");
   expect_array(frames, "/frames", 1);
-  struct FrameRefs { Ref pairs; std::optional<Ref> triples; };
-  std::vector<FrameRefs> refs;
-  std::unordered_map<std::string_view, char> used;
+  std::vector<std::size_t> pair_counts, triple_counts;
+  std::vector<std::uint32_t> uses;
   auto use = [&](Ref v, const std::string& list, std::size_t i, std::size_t j) {
     if (!v.is(Kind::String) || v.text().empty() || v.text().size() > 64) get_id(v, at(at(list, i), j));  // throws
     std::string_view id = v.text();
-    if (!sensors) used.emplace(id, 0);
-    else if (!declared.count(id))
+    const std::uint32_t n = sensors ? ids.find(id) : ids.insert(id).first;
+    if (n == StringIndex::kNone)
       invalid(at(at(list, i), j), "unknown id " + id_text(id) + ": neither a fence id nor listed in /sensors (§2.2)");
+    uses.push_back(n);
   };
   auto tuples = [&](Ref list, const std::string& pointer, std::size_t length) {
     expect_array(list, pointer, 0);
@@ -212,6 +217,7 @@ void load_contact_log(const Members& root, Input& in) {
       if (!t.is(Kind::Array) || t.size() != length) expect_array(t, at(pointer, i), length, length);  // throws
       for (std::size_t j = 0; j < length; ++j) use(t[j], pointer, i, j);
     }
+    return list.size();
   };
   for (std::size_t f = 0; f < frames.size(); ++f) {
     std::string fp = at("/frames", f);
@@ -220,29 +226,28 @@ void load_contact_log(const Members& root, Input& in) {
     if (!in.times.empty() && !(in.times.back() < t))
       invalid(fr.at("t"), "frame times must increase strictly: " + to_text(t) + " after " + to_text(in.times.back()) + " (§2.2)");
     in.times.push_back(t);
-    Ref pairs = fr.need("pairs");
-    tuples(pairs, fr.at("pairs"), 2);
+    pair_counts.push_back(tuples(fr.need("pairs"), fr.at("pairs"), 2));
     std::optional<Ref> triples = fr.get("triples");
     if (in.listed && !triples) invalid(fr.at("triples"), "required with \"triangles\": \"listed\" (§2.2)");
     if (!in.listed && triples) invalid(fr.at("triples"), "not allowed with \"from-pairs\" (§2.2)");
-    if (triples) tuples(*triples, fr.at("triples"), 3);
-    refs.push_back({pairs, triples});
+    triple_counts.push_back(triples ? tuples(*triples, fr.at("triples"), 3) : 0);
   }
-  std::vector<std::string> ids;
-  for (const auto& d : declared) ids.emplace_back(d.first);
-  for (const auto& u : used) ids.emplace_back(u.first);
-  set_vertices(in, std::move(ids));
-  for (std::size_t i = 0; i < fence.size(); ++i) {
-    std::uint32_t v = in.index.at(fence[i].text());
-    in.fence.push_back(v);
-    in.is_fence[v] = true;
+  std::vector<std::string> names;
+  for (std::uint32_t n = 0; n < ids.size(); ++n) names.emplace_back(ids.at(n));
+  set_vertices(in, std::move(names));
+  std::vector<std::uint32_t> vertex_of(ids.size());  // id number -> vertex index
+  for (std::uint32_t n = 0; n < ids.size(); ++n) vertex_of[n] = static_cast<std::uint32_t>(in.find(ids.at(n)));
+  for (std::size_t i = 0; i < fence_size; ++i) {
+    in.fence.push_back(vertex_of[i]);
+    in.is_fence[vertex_of[i]] = true;
   }
 
   // Pass 2: pairs and triples by compact ids, with the per-frame rules. last_pair[id] and
   // last_triple[id] hold 1 + the last frame that listed the id: duplicates within a frame and
   // the pairs of a triple are checked without any hashing of (id, frame).
   std::vector<std::uint32_t> last_pair, last_triple;
-  auto vertex = [&](Ref v) { return in.index.find(v.text())->second; };
+  std::size_t next_use = 0;
+  auto vertex = [&] { return vertex_of[uses[next_use++]]; };
   auto pair_in_frame = [&](std::uint32_t a, std::uint32_t b, std::uint32_t frame) {
     std::uint32_t id = in.pairs.find(a, b);
     return id != PairTable::kNone && last_pair[id] == frame + 1;
@@ -251,9 +256,8 @@ void load_contact_log(const Members& root, Input& in) {
     const std::uint32_t frame = static_cast<std::uint32_t>(f);
     auto where = [&](const char* list, std::size_t i) { return at(at("/frames", f) + list, i); };
     in.pairs_begin.push_back(in.frame_pairs.size());
-    Ref pairs = refs[f].pairs;
-    for (std::size_t i = 0; i < pairs.size(); ++i) {
-      std::uint32_t a = vertex(pairs[i][0]), b = vertex(pairs[i][1]);
+    for (std::size_t i = 0; i < pair_counts[f]; ++i) {
+      std::uint32_t a = vertex(), b = vertex();
       if (a == b) invalid(where("/pairs", i), "pair of identical ids " + id_text(in.names[a]) + " (§2.2)");
       if (b < a) std::swap(a, b);
       std::uint32_t id = in.pairs.intern(a, b);
@@ -264,24 +268,21 @@ void load_contact_log(const Members& root, Input& in) {
       in.frame_pairs.push_back(id);
     }
     in.triples_begin.push_back(in.frame_triples.size());
-    if (refs[f].triples) {
-      Ref triples = *refs[f].triples;
-      for (std::size_t i = 0; i < triples.size(); ++i) {
-        std::array<std::uint32_t, 3> v{vertex(triples[i][0]), vertex(triples[i][1]), vertex(triples[i][2])};
-        std::sort(v.begin(), v.end());
-        if (v[0] == v[1] || v[1] == v[2]) invalid(where("/triples", i), "triple with a repeated id (§2.2)");
-        const std::pair<int, int> sides[3] = {{0, 1}, {0, 2}, {1, 2}};
-        for (auto [x, y] : sides)
-          if (!pair_in_frame(v[x], v[y], frame))
-            invalid(where("/triples", i),
-                    "pair {" + in.names[v[x]] + ", " + in.names[v[y]] + "} of this triple is not listed in the frame (§2.2)");
-        std::uint32_t ab = in.pairs.find(v[0], v[1]);
-        auto [tid, fresh] = in.triple_ids.insert(pack(ab, v[2]), static_cast<std::uint32_t>(in.triples.size()));
-        if (fresh) { in.triples.push_back(v); last_triple.push_back(0); }
-        if (last_triple[*tid] == frame + 1) invalid(where("/triples", i), "triple listed twice in this frame (§2.2)");
-        last_triple[*tid] = frame + 1;
-        in.frame_triples.push_back(*tid);
-      }
+    for (std::size_t i = 0; i < triple_counts[f]; ++i) {
+      std::array<std::uint32_t, 3> v{vertex(), vertex(), vertex()};
+      std::sort(v.begin(), v.end());
+      if (v[0] == v[1] || v[1] == v[2]) invalid(where("/triples", i), "triple with a repeated id (§2.2)");
+      const std::pair<int, int> sides[3] = {{0, 1}, {0, 2}, {1, 2}};
+      for (auto [x, y] : sides)
+        if (!pair_in_frame(v[x], v[y], frame))
+          invalid(where("/triples", i),
+                  "pair {" + in.names[v[x]] + ", " + in.names[v[y]] + "} of this triple is not listed in the frame (§2.2)");
+      std::uint32_t ab = in.pairs.find(v[0], v[1]);
+      auto [tid, fresh] = in.triple_ids.insert(pack(ab, v[2]), static_cast<std::uint32_t>(in.triples.size()));
+      if (fresh) { in.triples.push_back(v); last_triple.push_back(0); }
+      if (last_triple[*tid] == frame + 1) invalid(where("/triples", i), "triple listed twice in this frame (§2.2)");
+      last_triple[*tid] = frame + 1;
+      in.frame_triples.push_back(*tid);
     }
     const std::size_t m = in.fence.size();
     for (std::size_t i = 0; i < m; ++i) {

@@ -8,7 +8,6 @@
 #include <memory>
 #include <string>
 #include <string_view>
-#include <unordered_map>
 #include <vector>
 
 #include "flat_map.hpp"
@@ -33,7 +32,7 @@ struct Input {
   // Vertices. A vertex's index is the rank of its id in byte-wise order (§1.3), so comparing
   // indices compares ids, and the canonical orientation (§3.2) is increasing index order.
   std::vector<std::string> names;
-  std::unordered_map<std::string_view, std::uint32_t> index;  // views into `names`
+  StringIndex index;                                           // views into `names`
   std::vector<std::uint32_t> fence;                            // listed cyclic order
   std::vector<bool> is_fence;
 
@@ -75,8 +74,8 @@ struct Input {
 
   // The vertex named `id`, or -1.
   std::int64_t find(std::string_view id) const {
-    auto it = index.find(id);
-    return it == index.end() ? -1 : std::int64_t(it->second);
+    std::uint32_t v = index.find(id);
+    return v == StringIndex::kNone ? -1 : std::int64_t(v);
   }
   std::size_t vertex_count() const { return names.size(); }
 
