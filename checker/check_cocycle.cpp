@@ -167,12 +167,13 @@ std::string check_cocycle(const Certificate& cert, Stack& stack, std::ostream& o
     const std::uint32_t k = read_index(row[0], w.at(0), n + 1, "frame");
     std::uint32_t v[2] = {read_sensor(row[1], w.at(1), in), read_sensor(row[2], w.at(2), in)};
     if (v[0] == v[1]) throw Rejected(w.at(2).str(), "sensor \"" + stack.name(v[0]) + "\"", "repeated in one cell (rule 4.4.1)");
-    const std::string item = "edge [" + stack.name(v[0]) + "," + stack.name(v[1]) + "] at " + stack.frame_text(k);
+    const std::uint32_t a = v[0], b = v[1];  // as written
+    auto item = [&] { return "edge [" + stack.name(a) + "," + stack.name(b) + "] at " + stack.frame_text(k); };
     Entry e{canonical_order(v, 2), values.read(row[3], w.at(3), ring, "rule 4.4.1"), 0};
-    if (!stack.edge_present(v[0], v[1], k)) throw Rejected(w.str(), item, "the edge is not present at this frame (rule 4.4.1)");
+    if (!stack.edge_present(v[0], v[1], k)) throw Rejected(w.str(), item(), "the edge is not present at this frame (rule 4.4.1)");
     e.key = pack(stack.pair_id(v[0], v[1]), k);
     auto [first, fresh] = c.edges.insert(e.key, static_cast<std::uint32_t>(i));
-    if (!fresh) throw Rejected(w.str(), item, "the cell appears twice (also /edges/" + std::to_string(*first) + ", rule 4.4.1)");
+    if (!fresh) throw Rejected(w.str(), item(), "the cell appears twice (also /edges/" + std::to_string(*first) + ", rule 4.4.1)");
     c.edge_rows.push_back(e);
   }
   Ref verticals = m.need("verticals");

@@ -206,12 +206,12 @@ std::string check_sheet(const Certificate& cert, Stack& stack, std::ostream& out
     if (a == b) throw Rejected(w.at(2).str(), "sensor \"" + stack.name(a) + "\"", "repeated in one cell (rule 4.3.1)");
     r.coef = values.read(row[3], w.at(3), ring, "rule 4.3.2");
     r.sign = canonical_order(r.v, 2);
-    const std::string item = "prism [" + stack.name(a) + "," + stack.name(b) + "] over " + stack.slab_text(r.k);
+    auto item = [&] { return "prism [" + stack.name(a) + "," + stack.name(b) + "] over " + stack.slab_text(r.k); };
     for (std::uint32_t end : {r.k, r.k + 1})
       if (!stack.edge_present(r.v[0], r.v[1], end))
-        throw Rejected(w.str(), item, "the edge is not present at " + stack.frame_text(end) + " (rule 4.3.1)");
+        throw Rejected(w.str(), item(), "the edge is not present at " + stack.frame_text(end) + " (rule 4.3.1)");
     auto [first, fresh] = seen_prisms.insert(pack(stack.pair_id(r.v[0], r.v[1]), r.k), static_cast<std::uint32_t>(i));
-    if (!fresh) throw Rejected(w.str(), item, "the cell appears twice (also /prisms/" + std::to_string(*first) + ", rule 4.3.2)");
+    if (!fresh) throw Rejected(w.str(), item(), "the cell appears twice (also /prisms/" + std::to_string(*first) + ", rule 4.3.2)");
     rows.push_back(r);
   }
   out << "sheet: " << triangles.size() << " triangles and " << prisms.size()
