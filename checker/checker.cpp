@@ -1,5 +1,6 @@
 #include "checker.hpp"
 
+#include <future>
 #include <new>
 
 #include "certificate.hpp"
@@ -13,17 +14,22 @@ namespace sweepcheck {
 
 int check_texts(std::string input_bytes, std::string cert_bytes, std::ostream& out, std::ostream& err) {
   try {
-    // Everything that makes a file unreadable (exit 2) is found before any certificate rule.
-    // The input's DOM is dropped once validated; the certificate's is read after that.
+    // Everything that makes a file unreadable (exit 2) is found before any certificate rule:
+    // the input's errors first. The certificate is parsed on a second thread meanwhile (or
+    // later on this one, if no thread can be made); the input's DOM is dropped once validated.
     const std::string hash = sha256_hex(input_bytes);
+    auto cert_parse = std::async(std::launch::async | std::launch::deferred, [&cert_bytes] {
+      json::Document doc = json::parse(cert_bytes, "CERT");
+      std::string().swap(cert_bytes);
+      return doc;
+    });
     std::unique_ptr<Input> in;
     {
       const json::Document input_doc = json::parse(input_bytes, "INPUT");
       std::string().swap(input_bytes);
       in = load_input(input_doc);
     }
-    const json::Document cert_doc = json::parse(cert_bytes, "CERT");
-    std::string().swap(cert_bytes);
+    const json::Document cert_doc = cert_parse.get();
 
     out << "input: " << in->format << ", sha256 " << hash << ", " << in->fence.size() << " fence sensors, "
         << in->vertex_count() << " sensors in all";
