@@ -8,10 +8,11 @@ namespace sweepcert {
 const std::vector<CommandSpec>& command_table() {
   static const std::vector<CommandSpec> table = {
       {"prove", "sweepcert prove INPUT -o CERT [options]",
-       "Decide whether a separating sheet proves that no evasion path exists, and write a\n"
-       "  certificate either way: a sheet (claim no-evasion) or a cocycle showing no sheet exists\n"
-       "  (claim no-sheet). INPUT is a positional scenario (sweepcert-scenario-1) or a contact\n"
-       "  log (sweepcert-contacts-1); see schema/README.md."},
+       "Decide whether an evasion path exists and write a certificate: a separating sheet or\n"
+       "  time-ordered chambers (claim no-evasion), an explicit intruder route (claim evasion),\n"
+       "  or, when only contacts are known and they cannot prove coverage, a cocycle (claim\n"
+       "  no-sheet). INPUT is a positional scenario (sweepcert-scenario-1) or a contact log\n"
+       "  (sweepcert-contacts-1); see schema/README.md."},
       {"contacts", "sweepcert contacts SCENARIO --every DT -o LOG",
        "Write the contact log that these sensors would record: frames at START + k*DT, at every\n"
        "  waypoint time inside the horizon and at END; pairs and triples decided exactly."},
@@ -22,12 +23,15 @@ const std::vector<CommandSpec>& command_table() {
 const std::vector<OptionSpec>& option_table() {
   static const std::vector<OptionSpec> table = {
       {"-o", "FILE", nullptr, "prove contacts", "where to write the certificate / log (required)"},
-      {"--method", "auto|sheet", "auto", "prove",
-       "proof method; 'auto' uses the separating sheet (the only method in this version)"},
+      {"--method", "auto|sheet|chambers|route", "auto", "prove",
+       "auto: a separating sheet if one exists, else (positional input) time-ordered chambers,\n"
+       "                          else an evasion route; or force one method"},
       {"--ring", "z|z2", "z", "prove",
        "coefficients of the sheet or cocycle: integers (z) or integers mod 2 (z2, faster)"},
       {"--max-frames", "N", "20000", "prove",
        "positional input: at most this many frames when refining time"},
+      {"--rounds", "N", "4", "prove",
+       "chambers/route: refinement rounds (halving slabs, finer cells) before giving up"},
       {"--every", "DT", nullptr, "contacts", "spacing of regular frames (an exact number > 0)"},
       {"--quiet", nullptr, nullptr, "prove contacts", "print nothing but errors"},
   };
@@ -92,7 +96,8 @@ std::string help_text(const std::string& command) {
     h << "\n";
   }
   h << "\nExit codes: 0 certificate (or log) written; 2 invalid input or usage, nothing written;\n"
-       "4 internal failure, nothing written.\n"
+       "3 undecided (no method could certify an answer; the message names where), nothing\n"
+       "written; 4 internal failure, nothing written.\n"
        "A certificate covers the model as given (disks, fence, tracks or log) and nothing else:\n"
        "not sensor faults, occlusion or wrong logs. Follow site-specific security practice.\n";
   return h.str();

@@ -33,4 +33,40 @@ void emit_certificate(const Stack& stack, const SheetOutcome& o, const Certifica
   sink.end();
 }
 
+void emit_chambers(const Sweep& sweep, const ChamberResult& r, const CertificateHeader& header,
+                   CertificateSink& sink) {
+  // The sensor table lists the sensors that cover some cell, in first-use order.
+  std::vector<int> table_index(sweep.sensors.size(), -1);
+  std::vector<std::string> table;
+  for (const auto& slab : r.slabs)
+    slab.tree.preorder([&](const Cell& c) {
+      if (c.kind == CellKind::Covered && table_index[c.sensor] < 0) {
+        table_index[c.sensor] = static_cast<int>(table.size());
+        table.push_back(sweep.sensors[c.sensor].id);
+      }
+    });
+  sink.begin(header);
+  sink.chamber_square(Rational(r.square.x0), Rational(r.square.y0), Rational(r.square.side), table);
+  std::vector<int> tokens;
+  for (const auto& slab : r.slabs) {
+    tokens.clear();
+    slab.tree.preorder([&](const Cell& c) {
+      switch (c.kind) {
+        case CellKind::Split: tokens.push_back(-1); break;
+        case CellKind::Open: tokens.push_back(-2); break;
+        case CellKind::Outside: tokens.push_back(-3); break;
+        case CellKind::Covered: tokens.push_back(table_index[c.sensor]); break;
+      }
+    });
+    sink.chamber_slab(slab.a, slab.b, tokens);
+  }
+  sink.end();
+}
+
+void emit_route(const ChamberResult& r, const CertificateHeader& header, CertificateSink& sink) {
+  sink.begin(header);
+  for (const auto& p : r.route) sink.route_point(p[0], p[1], p[2]);
+  sink.end();
+}
+
 }  // namespace sweepcert

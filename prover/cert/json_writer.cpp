@@ -60,16 +60,18 @@ void JsonCertificateWriter::begin(const CertificateHeader& h) {
   append_json_string(buf_, h.input_sha256);
   buf_ += ",\n \"input_format\": ";
   append_json_string(buf_, h.input_format);
-  buf_ += ",\n \"ring\": ";
-  append_json_string(buf_, h.ring);
   buf_ += ",\n \"notes\": ";
   buf_ += h.notes_json.empty() ? "{}" : h.notes_json;
-  buf_ += ",\n \"frames\": [";
-  for (std::size_t i = 0; i < h.frames.size(); ++i) {
-    if (i) buf_ += i % 16 ? ", " : ",\n  ";
-    append_number(buf_, h.frames[i]);
+  if (h.method == "sheet" || h.method == "cocycle") {
+    buf_ += ",\n \"ring\": ";
+    append_json_string(buf_, h.ring);
+    buf_ += ",\n \"frames\": [";
+    for (std::size_t i = 0; i < h.frames.size(); ++i) {
+      if (i) buf_ += i % 16 ? ", " : ",\n  ";
+      append_number(buf_, h.frames[i]);
+    }
+    buf_ += "]";
   }
-  buf_ += "]";
 }
 
 void JsonCertificateWriter::open_array(const char* key) {
@@ -157,6 +159,54 @@ void JsonCertificateWriter::vertical_value(std::uint32_t slab, const std::string
   append_json_string(buf_, v);
   buf_ += ", ";
   append_integer(buf_, value);
+  buf_ += ']';
+  flush(false);
+}
+
+void JsonCertificateWriter::chamber_square(const Rational& x0, const Rational& y0,
+                                           const Rational& side,
+                                           const std::vector<std::string>& sensors) {
+  buf_ += ",\n \"square\": {\"origin\": [";
+  append_number(buf_, x0);
+  buf_ += ", ";
+  append_number(buf_, y0);
+  buf_ += "], \"side\": ";
+  append_number(buf_, side);
+  buf_ += "},\n \"sensors\": [";
+  for (std::size_t i = 0; i < sensors.size(); ++i) {
+    if (i) buf_ += ", ";
+    append_json_string(buf_, sensors[i]);
+  }
+  buf_ += "]";
+  open_array("slabs");
+}
+
+void JsonCertificateWriter::chamber_slab(const Rational& a, const Rational& b,
+                                         const std::vector<int>& tree) {
+  open_array("slabs");
+  buf_ += first_row_ ? "\n  {\"t\": [" : ",\n  {\"t\": [";
+  first_row_ = false;
+  append_number(buf_, a);
+  buf_ += ", ";
+  append_number(buf_, b);
+  buf_ += "], \"tree\": [";
+  for (std::size_t i = 0; i < tree.size(); ++i) {
+    if (i) buf_ += ',';
+    buf_ += std::to_string(tree[i]);
+    if (buf_.size() > (1u << 20)) flush(false);
+  }
+  buf_ += "]}";
+  flush(false);
+}
+
+void JsonCertificateWriter::route_point(const Rational& t, const Rational& x, const Rational& y) {
+  open_array("route");
+  row_start();
+  append_number(buf_, t);
+  buf_ += ", ";
+  append_number(buf_, x);
+  buf_ += ", ";
+  append_number(buf_, y);
   buf_ += ']';
   flush(false);
 }

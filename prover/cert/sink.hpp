@@ -31,6 +31,12 @@ class CertificateSink {
   virtual void edge_value(std::uint32_t frame, const std::string& a, const std::string& b,
                           const Integer& value) = 0;
   virtual void vertical_value(std::uint32_t slab, const std::string& v, const Integer& value) = 0;
+  // Chambers: the square and the sensor table first, then each slab's quadtree tokens.
+  virtual void chamber_square(const Rational&, const Rational&, const Rational&,
+                              const std::vector<std::string>&) {}
+  virtual void chamber_slab(const Rational&, const Rational&, const std::vector<int>&) {}
+  // Routes: the points in time order.
+  virtual void route_point(const Rational&, const Rational&, const Rational&) {}
   virtual void end() = 0;
 };
 
@@ -50,6 +56,10 @@ class JsonCertificateWriter : public CertificateSink {
   void edge_value(std::uint32_t frame, const std::string& a, const std::string& b,
                   const Integer& value) override;
   void vertical_value(std::uint32_t slab, const std::string& v, const Integer& value) override;
+  void chamber_square(const Rational& x0, const Rational& y0, const Rational& side,
+                      const std::vector<std::string>& sensors) override;
+  void chamber_slab(const Rational& a, const Rational& b, const std::vector<int>& tree) override;
+  void route_point(const Rational& t, const Rational& x, const Rational& y) override;
   void end() override;
   // Moves the finished file into place; throws on I/O failure.
   void commit();

@@ -43,6 +43,22 @@ bool disks_meet(const Point& a, const Rational& ra, const Point& b, const Ration
 
 bool in_disk(const Point& p, const Point& c, const Rational& r) { return power(p, c, r) <= 0; }
 
+// px, py are exact; cx, cy, rd are within 2u (relative) of c.x, c.y, r. With A = |px|+|cx|
+// (likewise B), the computed dx is off by at most 3u*A, so dx^2 by at most 7u*A^2; rd^2 by at
+// most 5u*rd^2; the sum's roundings add 2u*(A^2+B^2+rd^2). Bound: 16u*(A^2+B^2+rd^2).
+bool in_disk_filtered(double px, double py, const Point& c, const Rational& r, double cx,
+                      double cy, double rd) {
+  double dx = px - cx, dy = py - cy;
+  double v = dx * dx + dy * dy - rd * rd;
+  double A = std::fabs(px) + std::fabs(cx), B = std::fabs(py) + std::fabs(cy);
+  double bound = 8.0 * std::numeric_limits<double>::epsilon() * (A * A + B * B + rd * rd);
+  if (std::isfinite(v) && std::isfinite(bound)) {
+    if (v > bound) return false;
+    if (v < -bound) return true;
+  }
+  return in_disk(Point{Rational(px), Rational(py)}, c, r);
+}
+
 std::optional<Point> triple_witness(const Point c[3], const Rational r[3]) {
   auto inside_all = [&](const Point& x) {
     for (int i = 0; i < 3; ++i)

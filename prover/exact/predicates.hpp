@@ -13,8 +13,13 @@ namespace sweepcert {
 // Do the closed disks (a, ra) and (b, rb) share a point? |a-b|^2 <= (ra+rb)^2.
 bool disks_meet(const Point& a, const Rational& ra, const Point& b, const Rational& rb);
 
-// Is p in the closed disk (c, r)?
+// Is p in the closed disk (c, r)? Exact.
 bool in_disk(const Point& p, const Point& c, const Rational& r);
+
+// The same question for a point given in doubles that are exact (dyadic cell corners), with a
+// floating-point filter; `cd`/`rd` are the double images of c and r. Exact fallback.
+bool in_disk_filtered(double px, double py, const Point& c, const Rational& r, double cx,
+                      double cy, double rd);
 
 // A rational point in all three closed disks, if there is one. It is the point minimising the
 // largest power distance |x-c_i|^2 - r_i^2 whenever that minimum is <= 0: a centre, the foot of
