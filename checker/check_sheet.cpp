@@ -54,40 +54,66 @@ bool nonzero(const V& x, Ring ring) { return ring == Ring::Z ? x != 0 : (x % 2) 
 // Rules 3 and 4 with coefficients of type V: Checked64, or Int when some coefficient does not
 // fit 64 bits or a Checked64 sum overflowed. Throws Rejected, or std::overflow_error from
 // Checked64.
+//
+// The boundary is summed one frame at a time: the cells at frame k (edges at k, verticals over
+// slab k) are faces only of the rows at frames k - 1 (a prism's top edge) and k. Small maps per
+// frame are much faster than one map of every cell of a large sheet.
 template <class V>
 std::string boundary_and_winding(const std::vector<Row>& rows, const Values& values, Stack& stack, Ring ring,
                                  const Int& winding, std::ostream& out) {
-  FlatMap<V> edges, verticals;
-  edges.reserve(rows.size());
-  for (const Row& r : rows) {
-    const V c = r.sign < 0 ? V(-values.get<V>(r.coef)) : values.get<V>(r.coef);
-    for_each_face(r, stack, [&](bool vertical, std::uint64_t key, int s) {
-      const V term = s < 0 ? V(-c) : c;
-      auto [slot, fresh] = (vertical ? verticals : edges).insert(key, term);
-      if (!fresh) *slot += term;
+  const std::size_t frames = stack.frame_count();
+  // The rows by frame, a counting sort: the rows at frame k are by_frame[begin[k], begin[k + 1]).
+  std::vector<std::size_t> begin(frames + 2, 0);
+  for (const Row& r : rows) ++begin[r.k + 2];
+  for (std::size_t k = 2; k < begin.size(); ++k) begin[k] += begin[k - 1];
+  std::vector<std::uint32_t> by_frame(rows.size());
+  for (std::uint32_t i = 0; i < rows.size(); ++i) by_frame[begin[rows[i].k + 1]++] = i;
+
+  FlatMap<V> bad_edges, bad_verticals;  // nonzero cells off the fence cylinder
+  std::vector<V> wind(stack.fence_size(), V(0));
+  std::size_t on_cylinder = 0;
+  for (std::uint32_t k = 0; k < frames; ++k) {
+    const std::size_t first = k > 0 ? begin[k - 1] : 0, last = begin[k + 1];  // rows at k - 1 and k
+    if (first == last) continue;
+    FlatMap<V> edges, verticals;  // at frame k: pair id -> sum, vertex -> sum
+    edges.reserve(3 * (last - first));
+    for (std::size_t i = first; i < last; ++i) {
+      const Row& r = rows[by_frame[i]];
+      const V c = r.sign < 0 ? V(-values.get<V>(r.coef)) : values.get<V>(r.coef);
+      for_each_face(r, stack, [&](bool vertical, std::uint64_t key, int s) {
+        if (static_cast<std::uint32_t>(key) != k) return;
+        const V term = s < 0 ? V(-c) : c;
+        auto [slot, fresh] = (vertical ? verticals : edges).insert(key >> 32, term);
+        if (!fresh) *slot += term;
+      });
+    }
+    // Rule 3 (nothing outside the fence cylinder: fence edges, fence verticals), and rule 4's
+    // sums: the winding along every fence edge, in listed orientation.
+    edges.for_each([&](std::uint64_t pair, const V& x) {
+      if (!nonzero(x, ring)) return;
+      const int i = stack.fence_edge(static_cast<std::uint32_t>(pair));
+      if (i < 0) {
+        bad_edges.insert(pack(static_cast<std::uint32_t>(pair), k), x);
+        return;
+      }
+      ++on_cylinder;
+      wind[static_cast<std::size_t>(i)] += stack.fence_sign(static_cast<std::size_t>(i)) < 0 ? V(-x) : x;
+    });
+    verticals.for_each([&](std::uint64_t v, const V& x) {
+      if (!nonzero(x, ring)) return;
+      if (!stack.input().is_fence[v]) bad_verticals.insert(pack(static_cast<std::uint32_t>(v), k), x); else ++on_cylinder;
     });
   }
-  // Rule 3: nothing outside the fence cylinder (fence verticals, fence edges).
-  FlatMap<char> bad_edges, bad_verticals;
-  std::size_t on_cylinder = 0;
-  edges.for_each([&](std::uint64_t key, const V& x) {
-    if (!nonzero(x, ring)) return;
-    if (stack.fence_edge(static_cast<std::uint32_t>(key >> 32)) < 0) bad_edges.insert(key, 0); else ++on_cylinder;
-  });
-  verticals.for_each([&](std::uint64_t key, const V& x) {
-    if (!nonzero(x, ring)) return;
-    if (!stack.input().is_fence[key >> 32]) bad_verticals.insert(key, 0); else ++on_cylinder;
-  });
   if (bad_edges.size() + bad_verticals.size() > 0) {
     // Name the first row (in document order) whose boundary touches an offending cell.
     for (const Row& r : rows) {
       bool hit = false;
       std::string what;
       for_each_face(r, stack, [&](bool vertical, std::uint64_t key, int) {
-        if (hit || !(vertical ? bad_verticals : bad_edges).contains(key)) return;
+        const V* x = (vertical ? bad_verticals : bad_edges).find(key);
+        if (hit || !x) return;
         hit = true;
-        const V& x = *(vertical ? verticals : edges).find(key);
-        what = face_text(stack, vertical, key) + " has boundary coefficient " + x.str() +
+        what = face_text(stack, vertical, key) + " has boundary coefficient " + x->str() +
                (ring == Ring::Z2 ? " (odd)" : "");
       });
       if (hit)
@@ -98,12 +124,7 @@ std::string boundary_and_winding(const std::vector<Row>& rows, const Values& val
     }
   }
   out << "boundary: " << on_cylinder << " nonzero cells, all on the fence cylinder (rule 3)\n";
-  // Rule 4: winding along every fence edge, in listed orientation, summed over frames.
-  std::vector<V> wind(stack.fence_size(), V(0));
-  edges.for_each([&](std::uint64_t key, const V& x) {
-    int i = stack.fence_edge(static_cast<std::uint32_t>(key >> 32));
-    if (i >= 0) wind[static_cast<std::size_t>(i)] += stack.fence_sign(static_cast<std::size_t>(i)) < 0 ? V(-x) : x;
-  });
+  // Rule 4.
   const auto& fence = stack.input().fence;
   for (std::size_t i = 0; i < wind.size(); ++i) {
     bool ok = ring == Ring::Z ? to_int(wind[i]) == winding : nonzero(wind[i], ring);
