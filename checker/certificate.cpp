@@ -117,23 +117,30 @@ void check_frames(const Certificate& cert, const Input& in, std::size_t& log_sta
 Certificate read_header(Ref root, const Input& in, const std::string& input_sha256, std::ostream& out) {
   try {
     Certificate cert{Members(root, "", {"format", "claim", "method", "input_sha256", "input_format", "ring", "frames",
-                                        "notes", "winding", "triangles", "prisms", "fence_value", "edges", "verticals"}),
+                                        "notes", "winding", "triangles", "prisms", "fence_value", "edges", "verticals",
+                                        "square", "sensors", "slabs", "route"}),
                      "", "", Ring::Z, {}, 0};
     const Members& m = cert.members;
     one_of(m, "format", {"sweepcert-certificate-1"});
     cert.claim = one_of(m, "claim", {"no-evasion", "no-sheet", "evasion"});
     cert.method = one_of(m, "method", {"sheet", "cocycle", "chambers", "route"});
-    if (cert.claim == "evasion" || cert.method == "chambers" || cert.method == "route")
-      throw Rejected(cert.claim == "evasion" ? "/claim" : "/method", "",
-                     "reserved for a later version of the format; this checker does not accept it (§4.1)");
-    if ((cert.claim == "no-evasion") != (cert.method == "sheet"))
+    const std::string claim_of = cert.method == "cocycle" ? "no-sheet" : cert.method == "route" ? "evasion" : "no-evasion";
+    if (cert.claim != claim_of)
       throw Rejected("/method", "", "method \"" + cert.method + "\" does not go with claim \"" + cert.claim +
-                                        "\" (sheet proves no-evasion, cocycle proves no-sheet, §4.1)");
-    const bool sheet = cert.method == "sheet";
-    for (std::string_view key : {"winding", "triangles", "prisms", "fence_value", "edges", "verticals"}) {
-      bool own = (key == "winding" || key == "triangles" || key == "prisms") == sheet;
-      if (own) m.need(key);
-      else if (m.get(key)) throw Rejected(m.at(key), "", "key not allowed with method \"" + cert.method + "\" (§4.3, §4.4)");
+                                        "\" (sheet and chambers prove no-evasion, cocycle proves no-sheet, route proves "
+                                        "evasion, §4.1)");
+    // The key set of the method: its own keys are required, any other method's are not allowed.
+    const bool stacked = cert.method == "sheet" || cert.method == "cocycle";
+    static const std::pair<std::string_view, std::string_view> kOwner[] = {
+        {"winding", "sheet"},     {"triangles", "sheet"}, {"prisms", "sheet"},    {"fence_value", "cocycle"},
+        {"edges", "cocycle"},     {"verticals", "cocycle"}, {"square", "chambers"}, {"sensors", "chambers"},
+        {"slabs", "chambers"},    {"route", "route"},     {"ring", ""},           {"frames", ""}};
+    for (const auto& [key, owner] : kOwner) {
+      // ring and frames belong to sheet and cocycle; they are read (and required) below.
+      const bool own = owner.empty() ? stacked : owner == cert.method;
+      if (own && !owner.empty()) m.need(key);
+      else if (!own && m.get(key))
+        throw Rejected(m.at(key), "", "key not allowed with method \"" + cert.method + "\" (§4.1, §4.3-§4.6)");
     }
     std::string_view hash = get_string(m.need("input_sha256"), "/input_sha256");
     if (!is_lower_hex(hash)) throw Rejected("/input_sha256", "", "must be 64 lowercase hex digits (§4.1)");
@@ -143,6 +150,17 @@ Certificate read_header(Ref root, const Input& in, const std::string& input_sha2
     std::string_view format = get_string(m.need("input_format"), "/input_format");
     if (format != in.format)
       throw Rejected("/input_format", "", "is \"" + std::string(format) + "\" but INPUT is \"" + in.format + "\" (§4.1)");
+    if (!stacked) {
+      if (in.kind != InputKind::Scenario)
+        throw Rejected("/input_format", "", "method \"" + cert.method +
+                                                "\" needs a positional scenario (sweepcert-scenario-1) as input (§4.1)");
+      if (auto notes = m.get("notes")) {
+        std::string dup = json::find_duplicate_key(*notes, "/notes");
+        if (!dup.empty()) throw Rejected(dup, "", "duplicated key (§1.4)");
+      }
+      out << "certificate: claim " << cert.claim << " by " << cert.method << "; hash and input format match\n";
+      return cert;
+    }
     cert.ring = one_of(m, "ring", {"z", "z2"}) == "z" ? Ring::Z : Ring::Z2;
     Ref frames = m.need("frames");
     expect_array(frames, "/frames", 1);

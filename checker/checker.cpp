@@ -7,6 +7,7 @@
 #include "errors.hpp"
 #include "input.hpp"
 #include "json_reader.hpp"
+#include "positional.hpp"
 #include "sha256.hpp"
 #include "stack.hpp"
 
@@ -40,8 +41,13 @@ int check_texts(std::string input_bytes, std::string cert_bytes, std::ostream& o
 
     try {
       Certificate cert = read_header(cert_doc.root(), *in, hash, out);
-      Stack stack(*in, cert.frames, cert.log_start);
-      std::string summary = cert.method == "sheet" ? check_sheet(cert, stack, out) : check_cocycle(cert, stack, out);
+      std::string summary;
+      if (cert.method == "chambers" || cert.method == "route") {
+        summary = cert.method == "chambers" ? check_chambers(cert, *in, out) : check_route(cert, *in, out);
+      } else {
+        Stack stack(*in, cert.frames, cert.log_start);
+        summary = cert.method == "sheet" ? check_sheet(cert, stack, out) : check_cocycle(cert, stack, out);
+      }
       if (in->kind == InputKind::ContactLog && cert.method == "sheet")
         summary += "; assumes every contact present at two consecutive log frames holds in between (§2.2)";
       out << "ACCEPTED: " << summary << "\n";
