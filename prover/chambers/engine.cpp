@@ -322,6 +322,21 @@ bool find_route(const Region& region, const Square& sq,
 
 }  // namespace
 
+Slab classify_slab(const Sweep& sweep, const Rational& a, const Rational& b, int depth, Square& square) {
+  Region region(sweep);
+  square = square_around(region);
+  OutsideMemo memo;
+  Slab slab;
+  slab.a = a;
+  slab.b = b;
+  SlabBuilder builder(sweep, region, square, memo, slab, std::clamp(depth, 1, 24));
+  builder.start();
+  std::size_t budget = SIZE_MAX;
+  std::vector<char> live = builder.refine(nullptr, budget);  // first slab: every open cell is live
+  slab.live = std::count(live.begin(), live.end(), 1);
+  return slab;
+}
+
 std::string check_route(const Sweep& s, const std::vector<std::array<Rational, 3>>& route) {
   if (route.size() < 2) return "route has fewer than two points";
   Region region(s);

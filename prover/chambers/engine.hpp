@@ -51,6 +51,10 @@ using ChamberProgress = std::function<void(const std::string&)>;
 ChamberResult decide_by_chambers(const Sweep& sweep, const ChamberPlan& plan,
                                  const ChamberProgress& progress = {});
 
+// One slab classified with every mixed cell refined to `depth` (no live-set pruning), over the
+// square the engine would choose. For reference tests on static configurations.
+Slab classify_slab(const Sweep& sweep, const Rational& a, const Rational& b, int depth, Square& square);
+
 // Exact check of a route against every disk (schema §4.6); returns "" or what fails.
 std::string check_route(const Sweep& sweep, const std::vector<std::array<Rational, 3>>& route);
 
