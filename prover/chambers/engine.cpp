@@ -175,14 +175,25 @@ class SlabBuilder {
         if (live[i] && c.kind == CellKind::Open && !c.free && c.depth < max_depth_) todo.push_back(i);
       }
       if (todo.empty() || slab_.tree.size() + 4 * todo.size() > budget) return live;
-      for (std::uint32_t i : todo) {
-        std::vector<std::uint32_t> near = std::move(candidates_[i]);
-        candidates_.erase(i);
-        std::uint32_t first = slab_.tree.split(i);
-        for (std::uint32_t k = 0; k < 4; ++k) classify(first + k, near);
-      }
+      // Refine each live mixed cell two levels at once: recomputing the live set after every
+      // level costs more than the few cells that an extra level adds where it was not needed.
+      for (std::uint32_t i : todo) split_down(i, 3, budget);
     }
   }
+
+  void split_down(std::uint32_t i, int levels, std::size_t budget) {
+    const Cell& c = slab_.tree.at(i);
+    if (levels == 0 || c.kind != CellKind::Open || c.free || c.depth >= max_depth_ ||
+        slab_.tree.size() + 4 > budget)
+      return;
+    std::vector<std::uint32_t> near = std::move(candidates_[i]);
+    candidates_.erase(i);
+    std::uint32_t first = slab_.tree.split(i);
+    for (std::uint32_t k = 0; k < 4; ++k) classify(first + k, near);
+    for (std::uint32_t k = 0; k < 4; ++k) split_down(first + k, levels - 1, budget);
+  }
+
+
 
  private:
   const Region& region_;
@@ -390,7 +401,7 @@ ChamberResult decide_by_chambers(const Sweep& sweep, const ChamberPlan& plan,
   if (depth <= 0) {
     double rmin = 1e300;
     for (const auto& s : sweep.sensors) rmin = std::min(rmin, s.radius.get_d());
-    depth = static_cast<int>(std::ceil(std::log2(out.square.side / (rmin / 8))));
+    depth = static_cast<int>(std::ceil(std::log2(out.square.side / (rmin / 4))));
   }
   depth = std::clamp(depth, 1, 24);
   std::vector<Rational> ends = initial_slab_ends(sweep);

@@ -23,7 +23,7 @@
 namespace sweepcert {
 
 struct ChamberPlan {
-  int max_depth = 0;        // 0: chosen from the smallest radius (cells down to about r/8)
+  int max_depth = 0;        // 0: chosen from the smallest radius (cells down to about r/4)
   int rounds = 4;           // refinement rounds after the first
   bool try_chambers = true;
   bool try_route = true;

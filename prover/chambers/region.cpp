@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <limits>
 
 #include "exact/predicates.hpp"
 
@@ -16,6 +17,8 @@ Region::Region(const Sweep& sweep) {
     const Point& a = v_[i];
     const Point& b = v_[(i + 1) % v_.size()];
     double ax = a.x.get_d(), ay = a.y.get_d(), bx = b.x.get_d(), by = b.y.get_d();
+    vx_.push_back(ax);
+    vy_.push_back(ay);
     // Widened by a relative hair so the double box surely contains the exact edge.
     double pad = 1e-9 * (std::max({std::fabs(ax), std::fabs(bx), std::fabs(ay), std::fabs(by)}) + 1);
     edge_bbox_.push_back({std::min(ax, bx) - pad, std::min(ay, by) - pad, std::max(ax, bx) + pad,
@@ -42,6 +45,36 @@ int Region::classify_point(const Point& p) const {
       bool right = (b.y > a.y) ? o > 0 : o < 0;
       if (right) inside = !inside;
     }
+  }
+  return inside ? +1 : -1;
+}
+
+int Region::classify_point(double px, double py) const {
+  // Crossing number in doubles. Vertices are within 2u (relative) of their rationals, the point
+  // is exact. Each orientation is certain when it exceeds 16u times the sum of the magnitudes of
+  // its products (a generous bound for two rounded inputs and four roundings); each comparison
+  // of y values is certain when they differ by more than 4u|y|. Otherwise: exact.
+  const double u = std::numeric_limits<double>::epsilon() / 2;
+  bool inside = false;
+  std::size_t m = vx_.size();
+  for (std::size_t i = 0; i < m; ++i) {
+    std::size_t j = (i + 1) % m;
+    double ay = vy_[i], by = vy_[j];
+    double tol_a = 4 * u * std::fabs(ay), tol_b = 4 * u * std::fabs(by);
+    if (std::fabs(ay - py) <= tol_a + 1e-300 || std::fabs(by - py) <= tol_b + 1e-300)
+      return classify_point(Point{Rational(px), Rational(py)});
+    if ((ay > py) == (by > py)) {
+      continue;  // no crossing; the point may still lie on this edge only if py is between
+    }
+    double ax = vx_[i], bx = vx_[j];
+    double l = (bx - ax) * (py - ay), r = (by - ay) * (px - ax);
+    double det = l - r;
+    double bound = 16 * u * ((std::fabs(bx) + std::fabs(ax)) * (std::fabs(py) + std::fabs(ay)) +
+                             (std::fabs(by) + std::fabs(ay)) * (std::fabs(px) + std::fabs(ax)));
+    if (std::fabs(det) <= bound) return classify_point(Point{Rational(px), Rational(py)});
+    int o = det > 0 ? 1 : -1;
+    bool right = (by > ay) ? o > 0 : o < 0;
+    if (right) inside = !inside;
   }
   return inside ? +1 : -1;
 }
@@ -89,8 +122,8 @@ bool Region::box_outside(const BoxD& b) const {
   }
   for (std::size_t e = 0; e < v_.size(); ++e)
     if (edge_meets_open_box(e, b)) return false;
-  Point centre{(Rational(b.x0) + Rational(b.x1)) / 2, (Rational(b.y0) + Rational(b.y1)) / 2};
-  return classify_point(centre) < 0;
+  // The centre of a dyadic box is an exact double.
+  return classify_point((b.x0 + b.x1) / 2, (b.y0 + b.y1) / 2) < 0;
 }
 
 }  // namespace sweepcert

@@ -27,7 +27,10 @@ class Region {
  private:
   bool edge_meets_open_box(std::size_t e, const BoxD& b) const;
   int classify_point(const Point& p) const;  // +1 inside, 0 on boundary, -1 outside
+  // The same for a point with exact double coordinates, filtered; exact when in doubt.
+  int classify_point(double px, double py) const;
   std::vector<Point> v_;
+  std::vector<double> vx_, vy_;
   std::vector<BoxD> edge_bbox_;
   double minx_, miny_, maxx_, maxy_;
 };
