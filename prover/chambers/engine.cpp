@@ -413,7 +413,7 @@ ChamberResult decide_by_chambers(const Sweep& sweep, const ChamberPlan& plan,
     std::vector<Span> prev;
     std::size_t budget = plan.max_cells, cells = 0;
     bool emptied = false;
-    std::size_t narrow_slab = 0, narrow_live = SIZE_MAX;
+    std::size_t narrow_slab = 0, narrow_live = SIZE_MAX, first_empty = 0;
     for (std::size_t j = 0; j + 1 < ends.size(); ++j) {
       Slab& slab = slabs[j];
       slab.a = ends[j];
@@ -426,6 +426,7 @@ ChamberResult decide_by_chambers(const Sweep& sweep, const ChamberPlan& plan,
       prev = live_spans(slab.tree, live);
       slab.live = prev.size();
       if (slab.live > 0 && slab.live < narrow_live) { narrow_live = slab.live; narrow_slab = j; }
+      if (slab.live == 0 && !first_empty) first_empty = j + 1;
       if (progress && j % 16 == 0)
         progress("round " + std::to_string(round + 1) + ": slab " + std::to_string(j + 1) + "/" +
                  std::to_string(ends.size() - 1) + ", " + std::to_string(cells) + " cells");
@@ -450,8 +451,12 @@ ChamberResult decide_by_chambers(const Sweep& sweep, const ChamberPlan& plan,
       }
     }
     // Where did resolution run out? The slab whose live set was smallest, at a live cell of
-    // the finest size.
-    {
+    // the finest size. (With routes only, an empty live set means no route can exist.)
+    if (first_empty) {
+      const Slab& s = slabs[first_empty - 1];
+      out.narrowest = "no route can exist: the live set is empty between t = " + to_text(s.a) +
+                      " and t = " + to_text(s.b) + " (use --method chambers or auto to certify that)";
+    } else {
       const Slab& s = slabs[narrow_slab];
       std::string where;
       double h = out.square.side / double(std::uint64_t(1) << depth);

@@ -9,6 +9,8 @@
 #include <nlohmann/json.hpp>
 #include <string>
 #include <sys/wait.h>
+#include <unistd.h>
+#include <cmath>
 
 using nlohmann::json;
 
@@ -28,7 +30,7 @@ json prove(const std::string& input, const std::string& ring, const std::string&
 }
 
 int check(const std::string& input, const json& cert) {
-  std::string path = work("mutant.json");
+  static const std::string path = work("mutant-" + std::to_string(::getpid()) + ".json");
   std::ofstream(path) << cert.dump(1);
   return run(std::string(SWEEPCHECK_BIN) + " " + input + " " + path);
 }
@@ -122,4 +124,127 @@ TEST_CASE("cocycles: removing or changing a value is rejected") {
   CHECK(check(input, zero) == 1);
   WARN("cocycle mutants tried: " << tried + 1);
   CHECK(tried > 0);
+}
+
+namespace {
+
+// Sensor centre at time t from the scenario JSON (doubles, for choosing far-away sensors only).
+std::pair<double, double> centre_at(const json& sensor, double t) {
+  if (sensor.contains("at")) return {std::stod(sensor["at"][0].get<std::string>()), std::stod(sensor["at"][1].get<std::string>())};
+  const auto& tr = sensor["track"];
+  auto num = [](const json& v) {
+    std::string s = v.get<std::string>();
+    auto slash = s.find('/');
+    return slash == std::string::npos ? std::stod(s) : std::stod(s.substr(0, slash)) / std::stod(s.substr(slash + 1));
+  };
+  if (t <= num(tr[0][0])) return {num(tr[0][1]), num(tr[0][2])};
+  for (std::size_t i = 0; i + 1 < tr.size(); ++i) {
+    double t0 = num(tr[i][0]), t1 = num(tr[i + 1][0]);
+    if (t <= t1) {
+      double f = (t - t0) / (t1 - t0);
+      return {num(tr[i][1]) + f * (num(tr[i + 1][1]) - num(tr[i][1])), num(tr[i][2]) + f * (num(tr[i + 1][2]) - num(tr[i][2]))};
+    }
+  }
+  return {num(tr.back()[1]), num(tr.back()[2])};
+}
+
+double num_text(const json& v) {
+  std::string s = v.get<std::string>();
+  auto slash = s.find('/');
+  return slash == std::string::npos ? std::stod(s) : std::stod(s.substr(0, slash)) / std::stod(s.substr(slash + 1));
+}
+
+}  // namespace
+
+TEST_CASE("routes: moving any waypoint into a disk is rejected") {
+  for (const char* name : {"column-gap", "static-hole", "pocket-wall-mirror"}) {
+    std::string input = std::string(CASES_DIR) + "/" + name + ".json";
+    json cert = prove(input, "z --method route", work(std::string(name) + ".route.json"));
+    REQUIRE(cert["claim"] == "evasion");
+    REQUIRE(check(input, cert) == 0);
+    json scenario;
+    std::ifstream(input) >> scenario;
+    for (std::size_t i = 0; i < cert["route"].size(); ++i) {
+      INFO(name << " /route/" << i);
+      // Onto the centre of a fence sensor: inside its disk at every time.
+      json moved = cert;
+      moved["route"][i][1] = scenario["fence"][i % scenario["fence"].size()]["at"][0];
+      moved["route"][i][2] = scenario["fence"][i % scenario["fence"].size()]["at"][1];
+      CHECK(check(input, moved) == 1);
+    }
+    // Re-bound to a sibling input (same hall, other sensors).
+    std::string sibling = std::string(CASES_DIR) + "/" +
+                          (std::string(name) == "column-gap" ? "column-sweep" : std::string(name) == "static-hole" ? "static-cover" : "pocket-wall") + ".json";
+    CHECK(check(sibling, cert) == 1);
+  }
+}
+
+TEST_CASE("chambers: relabelled, dropped or rebound cells are rejected") {
+  std::string input = std::string(CASES_DIR) + "/column-sweep.json";
+  json cert = prove(input, "z --method chambers", work("column-sweep.chambers.json"));
+  REQUIRE(cert["method"] == "chambers");
+  REQUIRE(check(input, cert) == 0);
+  json scenario;
+  std::ifstream(input) >> scenario;
+  std::vector<json> sensors;  // by id
+  for (const auto& f : scenario["fence"]) sensors.push_back(f);
+  for (const auto& m : scenario["sensors"]) sensors.push_back(m);
+  auto sensor = [&](const std::string& id) {
+    for (const auto& s : sensors) if (s["id"] == id) return s;
+    FAIL("unknown id " << id);
+    return json();
+  };
+  double x0 = num_text(cert["square"]["origin"][0]), y0 = num_text(cert["square"]["origin"][1]);
+  double side = num_text(cert["square"]["side"]);
+  std::size_t relabelled = 0, dropped = 0;
+  for (std::size_t s = 0; s < cert["slabs"].size(); s += 3) {
+    const json& slab = cert["slabs"][s];
+    double a = num_text(slab["t"][0]), b = num_text(slab["t"][1]);
+    // Walk the preorder tree to know each token's box.
+    struct Node { double x, y, h; };
+    std::vector<Node> stack{{x0, y0, side}};
+    for (std::size_t k = 0; k < slab["tree"].size(); ++k) {
+      Node n = stack.back();
+      stack.pop_back();
+      int token = slab["tree"][k];
+      if (token == -1) {
+        double h = n.h / 2;
+        stack.push_back({n.x + h, n.y + h, h});
+        stack.push_back({n.x, n.y + h, h});
+        stack.push_back({n.x + h, n.y, h});
+        stack.push_back({n.x, n.y, h});
+        continue;
+      }
+      if (token < 0 || k % 7 != 0) continue;  // a sample of covered cells
+      // A table sensor certainly not covering this cell: its disk stays more than one unit away
+      // from the cell centre at both slab ends (far beyond rounding).
+      double cx = n.x + n.h / 2, cy = n.y + n.h / 2;
+      for (std::size_t j = 0; j < cert["sensors"].size(); ++j) {
+        json sj = sensor(cert["sensors"][j]);
+        double r = std::stod(sj["radius"].get<std::string>().find('/') == std::string::npos ? sj["radius"].get<std::string>() : "1.5");
+        bool far = true;
+        for (double t : {a, b}) {
+          auto [sx, sy] = centre_at(sj, t);
+          if (std::hypot(sx - cx, sy - cy) < r + n.h + 1) far = false;
+        }
+        if (!far) continue;
+        INFO("slab " << s << " token " << k << " relabelled to " << cert["sensors"][j]);
+        json changed = cert;
+        changed["slabs"][s]["tree"][k] = static_cast<int>(j);
+        CHECK(check(input, changed) == 1);
+        ++relabelled;
+        break;
+      }
+    }
+    // Dropping any one cell leaves an incomplete tree.
+    for (std::size_t k = 1; k < slab["tree"].size(); k += 11) {
+      json removed = cert;
+      removed["slabs"][s]["tree"].erase(k);
+      CHECK(check(input, removed) == 1);
+      ++dropped;
+    }
+  }
+  WARN("chamber mutants: " << relabelled << " relabelled covered cells, " << dropped << " dropped cells");
+  CHECK(relabelled > 20);
+  CHECK(check(std::string(CASES_DIR) + "/column-gap.json", cert) == 1);  // sibling input
 }
