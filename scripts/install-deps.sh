@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # Installs everything sweepcert needs to build and test, from Debian 12 packages (run as root).
 set -euo pipefail
-packages=(g++ cmake make libgmp-dev libboost-dev nlohmann-json3-dev catch2 libssl-dev
+packages=(g++ cmake make python3 time libgmp-dev libboost-dev nlohmann-json3-dev catch2 libssl-dev
           libgudhi-dev libcgal-dev libeigen3-dev)
 missing=()
 for p in "${packages[@]}"; do
