@@ -3,6 +3,8 @@
 #include <sstream>
 #include <string>
 
+#include <catch2/catch.hpp>
+
 #include "checker.hpp"
 #include "sha256.hpp"
 
@@ -42,6 +44,23 @@ inline std::string certificate(const std::string& method, const std::string& inp
   return std::string(R"({"format":"sweepcert-certificate-1","claim":")") + (sheet ? "no-evasion" : "no-sheet") +
          R"(","method":")" + method + R"(","input_sha256":"@HASH","input_format":")" + input_format +
          R"(","ring":")" + ring + R"(","frames":)" + frames + "," + rest + "}";
+}
+
+// Checks acceptance / rejection with the output shown on failure.
+inline Run accepted(const std::string& input, const std::string& cert) {
+  Run r = run(input, cert);
+  INFO(r.out << r.err);
+  CHECK(r.code == 0);
+  CHECK_THAT(r.last(), Catch::Matchers::StartsWith("ACCEPTED"));
+  return r;
+}
+
+inline std::string rejected(const std::string& input, const std::string& cert) {
+  Run r = run(input, cert);
+  INFO(r.out << r.err);
+  CHECK(r.code == 1);
+  CHECK_THAT(r.last(), Catch::Matchers::StartsWith("REJECTED: "));
+  return r.last();
 }
 
 inline bool starts_with(const std::string& s, const std::string& prefix) { return s.rfind(prefix, 0) == 0; }

@@ -74,21 +74,6 @@ std::vector<int> with(std::vector<int> t, std::size_t i, int token) {
   return t;
 }
 
-Run accepted(const std::string& input, const std::string& cert) {
-  Run r = run(input, cert);
-  INFO(r.out << r.err);
-  CHECK(r.code == 0);
-  CHECK_THAT(r.last(), StartsWith("ACCEPTED"));
-  return r;
-}
-
-std::string rejected(const std::string& input, const std::string& cert) {
-  Run r = run(input, cert);
-  INFO(r.out << r.err);
-  CHECK(r.code == 1);
-  CHECK_THAT(r.last(), StartsWith("REJECTED: "));
-  return r.last();
-}
 
 }  // namespace
 

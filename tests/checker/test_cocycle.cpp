@@ -32,21 +32,6 @@ std::string ring4(const std::string& edges, const std::string& verticals, const 
 const std::string kEdges = R"([[0, "F0", "F1", "1"], [1, "F3", "F0", "1"]])";
 const std::string kVerticals = R"([[0, "F0", "1"]])";
 
-Run accepted(const std::string& input, const std::string& cert) {
-  Run r = run(input, cert);
-  INFO(r.out << r.err);
-  CHECK(r.code == 0);
-  CHECK_THAT(r.last(), StartsWith("ACCEPTED"));
-  return r;
-}
-
-std::string rejected(const std::string& input, const std::string& cert) {
-  Run r = run(input, cert);
-  INFO(r.out << r.err);
-  CHECK(r.code == 1);
-  CHECK_THAT(r.last(), StartsWith("REJECTED: "));
-  return r.last();
-}
 
 }  // namespace
 

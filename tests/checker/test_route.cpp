@@ -28,21 +28,6 @@ std::string route(const std::string& rows) {
 }
 const std::string kStay = R"([["0", "2", "2"], ["10", "2", "2"]])";
 
-Run accepted(const std::string& input, const std::string& cert) {
-  Run r = run(input, cert);
-  INFO(r.out << r.err);
-  CHECK(r.code == 0);
-  CHECK_THAT(r.last(), StartsWith("ACCEPTED"));
-  return r;
-}
-
-std::string rejected(const std::string& input, const std::string& cert) {
-  Run r = run(input, cert);
-  INFO(r.out << r.err);
-  CHECK(r.code == 1);
-  CHECK_THAT(r.last(), StartsWith("REJECTED: "));
-  return r.last();
-}
 
 }  // namespace
 

@@ -62,21 +62,6 @@ std::string square_sheet(const std::string& frames, const std::string& triangles
                      R"("winding": "1", "triangles": )" + triangles + R"(, "prisms": )" + prisms);
 }
 
-Run accepted(const std::string& input, const std::string& cert) {
-  Run r = run(input, cert);
-  INFO(r.out << r.err);
-  CHECK(r.code == 0);
-  CHECK_THAT(r.last(), StartsWith("ACCEPTED"));
-  return r;
-}
-
-std::string rejected(const std::string& input, const std::string& cert) {
-  Run r = run(input, cert);
-  INFO(r.out << r.err);
-  CHECK(r.code == 1);
-  CHECK_THAT(r.last(), StartsWith("REJECTED: "));
-  return r.last();
-}
 
 }  // namespace
 

@@ -128,15 +128,18 @@ TEST_CASE("cocycles: removing or changing a value is rejected") {
 
 namespace {
 
+// Exact-number text to double (for choosing far-away sensors only).
+double num_text(const json& v) {
+  std::string s = v.get<std::string>();
+  auto slash = s.find('/');
+  return slash == std::string::npos ? std::stod(s) : std::stod(s.substr(0, slash)) / std::stod(s.substr(slash + 1));
+}
+
 // Sensor centre at time t from the scenario JSON (doubles, for choosing far-away sensors only).
 std::pair<double, double> centre_at(const json& sensor, double t) {
   if (sensor.contains("at")) return {std::stod(sensor["at"][0].get<std::string>()), std::stod(sensor["at"][1].get<std::string>())};
   const auto& tr = sensor["track"];
-  auto num = [](const json& v) {
-    std::string s = v.get<std::string>();
-    auto slash = s.find('/');
-    return slash == std::string::npos ? std::stod(s) : std::stod(s.substr(0, slash)) / std::stod(s.substr(slash + 1));
-  };
+  auto num = [](const json& v) { return num_text(v); };
   if (t <= num(tr[0][0])) return {num(tr[0][1]), num(tr[0][2])};
   for (std::size_t i = 0; i + 1 < tr.size(); ++i) {
     double t0 = num(tr[i][0]), t1 = num(tr[i + 1][0]);
@@ -148,11 +151,6 @@ std::pair<double, double> centre_at(const json& sensor, double t) {
   return {num(tr.back()[1]), num(tr.back()[2])};
 }
 
-double num_text(const json& v) {
-  std::string s = v.get<std::string>();
-  auto slash = s.find('/');
-  return slash == std::string::npos ? std::stod(s) : std::stod(s.substr(0, slash)) / std::stod(s.substr(slash + 1));
-}
 
 }  // namespace
 

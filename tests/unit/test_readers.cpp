@@ -2,18 +2,14 @@
 #include <catch2/catch.hpp>
 #include <nlohmann/json.hpp>
 
+#include "json_helpers.hpp"
+
 #include "io/input_error.hpp"
 #include "io/read_input.hpp"
 
 using namespace sweepcert;
 using nlohmann::json;
 
-// nlohmann reads {{"a","b"}} as an object; arrays of arrays are built explicitly.
-static json A(std::initializer_list<json> items) {
-  json out = json::array();
-  for (const auto& item : items) out.push_back(item);
-  return out;
-}
 
 namespace {
 

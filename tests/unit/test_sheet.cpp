@@ -5,6 +5,8 @@
 #include <map>
 #include <nlohmann/json.hpp>
 
+#include "json_helpers.hpp"
+
 #include "cert/emit.hpp"
 #include "io/read_input.hpp"
 #include "sheet/solve.hpp"
@@ -13,12 +15,6 @@
 using namespace sweepcert;
 using nlohmann::json;
 
-// nlohmann reads {{"a","b"}} as an object; arrays of arrays are built explicitly.
-static json A(std::initializer_list<json> items) {
-  json out = json::array();
-  for (const auto& item : items) out.push_back(item);
-  return out;
-}
 
 namespace {
 
