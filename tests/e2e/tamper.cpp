@@ -137,7 +137,7 @@ double num_text(const json& v) {
 
 // Sensor centre at time t from the scenario JSON (doubles, for choosing far-away sensors only).
 std::pair<double, double> centre_at(const json& sensor, double t) {
-  if (sensor.contains("at")) return {std::stod(sensor["at"][0].get<std::string>()), std::stod(sensor["at"][1].get<std::string>())};
+  if (sensor.contains("at")) return {num_text(sensor["at"][0]), num_text(sensor["at"][1])};
   const auto& tr = sensor["track"];
   auto num = [](const json& v) { return num_text(v); };
   if (t <= num(tr[0][0])) return {num(tr[0][1]), num(tr[0][2])};
@@ -219,7 +219,7 @@ TEST_CASE("chambers: relabelled, dropped or rebound cells are rejected") {
       double cx = n.x + n.h / 2, cy = n.y + n.h / 2;
       for (std::size_t j = 0; j < cert["sensors"].size(); ++j) {
         json sj = sensor(cert["sensors"][j]);
-        double r = std::stod(sj["radius"].get<std::string>().find('/') == std::string::npos ? sj["radius"].get<std::string>() : "1.5");
+        double r = num_text(sj["radius"]);
         bool far = true;
         for (double t : {a, b}) {
           auto [sx, sy] = centre_at(sj, t);
