@@ -24,8 +24,8 @@ const std::vector<OptionSpec>& option_table() {
   static const std::vector<OptionSpec> table = {
       {"-o", "FILE", nullptr, "prove contacts", "where to write the certificate / log (required)"},
       {"--method", "auto|sheet|chambers|route", "auto", "prove",
-       "auto: a separating sheet if one exists, else (positional input) time-ordered chambers,\n"
-       "                          else an evasion route; or force one method"},
+       "auto: a separating sheet if one exists, else (positional input)\n"
+       "time-ordered chambers, else an evasion route; or force one method"},
       {"--ring", "z|z2", "z", "prove",
        "coefficients of the sheet or cocycle: integers (z) or integers mod 2 (z2, faster)"},
       {"--max-frames", "N", "20000", "prove",
@@ -91,7 +91,12 @@ std::string help_text(const std::string& command) {
   for (const auto& o : option_table()) {
     if (!command.empty() && !applies(o, command)) continue;
     std::string left = std::string("  ") + o.name + (o.value ? std::string(" ") + o.value : "");
-    h << left << std::string(left.size() < 24 ? 24 - left.size() : 1, ' ') << o.help;
+    const std::string indent(24, ' ');
+    std::string help = o.help;
+    for (auto p = help.find('\n'); p != std::string::npos; p = help.find('\n', p + 1))
+      help.insert(p + 1, indent);
+    if (left.size() < 24) h << left << std::string(24 - left.size(), ' ') << help;
+    else h << left << "\n" << indent << help;
     if (o.fallback) h << " (default " << o.fallback << ")";
     h << "\n";
   }
