@@ -45,6 +45,7 @@ Quadtree::Quadtree(Ref tree, const std::string& pointer, std::size_t table_size)
   if (n > 0xFFFFFFF0u) throw Rejected(pointer, "", "too many nodes");
   nodes_.reserve(n);
   open_before_.reserve(n + 1);
+  parent_.reserve(n);
   open_before_.push_back(0);
   // Open splits: node index and how many of its children have been started. At most 41 deep.
   struct Open { std::uint32_t node; std::uint8_t started; };
@@ -67,6 +68,7 @@ Quadtree::Quadtree(Ref tree, const std::string& pointer, std::size_t table_size)
       ++parent.started;
     }
     nodes_.push_back(node);
+    parent_.push_back(stack.empty() ? 0 : stack.back().node);
     open_before_.push_back(open_before_.back() + (token == kOpen ? 1 : 0));
     if (token == kSplit) {
       if (node.depth >= kMaxDepth)

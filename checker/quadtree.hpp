@@ -35,19 +35,40 @@ class Quadtree {
   const std::vector<Node>& nodes() const { return nodes_; }
   std::size_t open_cells() const { return open_before_.back(); }
 
-  // Calls f(node index) for every open cell whose closed box meets the closed box
-  // [x0, x1] x [y0, y1]: a descent from the root into children whose boxes meet the query and
-  // that hold an open cell, so the cost is about (depth + results). `stack` is scratch space.
+  std::uint32_t parent(std::uint32_t i) const { return parent_[i]; }  // the root's is itself
+  std::uint32_t open_below(std::uint32_t i) const { return open_before_[nodes_[i].end] - open_before_[i]; }
+
+  // The lowest node whose subtree holds every cell touching leaf i: the first ancestor whose box
+  // holds leaf i's box away from its sides (a side on the boundary of Q has nothing beyond it).
+  std::uint32_t touch_root(std::uint32_t i) const {
+    const Node& c = nodes_[i];
+    const std::int64_t q = std::int64_t(1) << kLevel, x1 = c.x + c.side(), y1 = c.y + c.side();
+    std::uint32_t a = i;
+    for (;;) {
+      const Node& n = nodes_[a];
+      const std::int64_t s = n.side();
+      if ((c.x > n.x || n.x == 0) && (x1 < n.x + s || n.x + s == q) && (c.y > n.y || n.y == 0) &&
+          (y1 < n.y + s || n.y + s == q))
+        return a;
+      if (a == 0) return 0;
+      a = parent_[a];
+    }
+  }
+
+  // Calls f(node index) for every open cell below node `from` whose closed box meets the closed
+  // box [x0, x1] x [y0, y1]: a descent into children whose boxes meet the query and for which
+  // pending[child] > 0 (the caller's count of open cells below that it still wants; open_below
+  // for all of them), so the cost is about (depth + results). `stack` is scratch space.
   template <class F>
-  void for_each_open_touching(std::int64_t x0, std::int64_t y0, std::int64_t x1, std::int64_t y1,
-                              std::vector<std::uint32_t>& stack, F&& f) const {
+  void for_each_open_touching(std::uint32_t from, std::int64_t x0, std::int64_t y0, std::int64_t x1, std::int64_t y1,
+                              const std::vector<std::uint32_t>& pending, std::vector<std::uint32_t>& stack, F&& f) const {
     stack.clear();
-    stack.push_back(0);
+    stack.push_back(from);
     while (!stack.empty()) {
       const std::uint32_t i = stack.back();
       stack.pop_back();
+      if (pending[i] == 0) continue;  // no (wanted) open cell below
       const Node& n = nodes_[i];
-      if (open_before_[n.end] == open_before_[i]) continue;  // no open cell below
       const std::int64_t s = n.side();
       if (n.x > x1 || n.x + s < x0 || n.y > y1 || n.y + s < y0) continue;
       if (n.token == kOpen) { f(i); continue; }
@@ -62,6 +83,7 @@ class Quadtree {
  private:
   std::vector<Node> nodes_;
   std::vector<std::uint32_t> open_before_;  // open cells among nodes [0, i)
+  std::vector<std::uint32_t> parent_;
 };
 
 }  // namespace sweepcheck
