@@ -194,20 +194,10 @@ std::string check_cocycle(const Certificate& cert, Stack& stack, std::ostream& o
   out << "cochain: " << edges.size() << " edge values and " << verticals.size()
       << " vertical values, every cell present, none twice, no zero value (rule 1)\n";
 
-  if (!values.any_big()) {
-    std::ostringstream findings;  // printed once, whichever path finishes
-    try {
-      std::string summary = evaluate<Checked64>(c, values, stack, ring, fence_value, findings);
-      out << findings.str();
-      return summary;
-    } catch (const Rejected&) {
-      out << findings.str();
-      throw;
-    } catch (const std::overflow_error&) {
-      // A sum left 64 bits: redo exactly.
-    }
-  }
-  return evaluate<Int>(c, values, stack, ring, fence_value, out);
+  return fast_then_exact(!values.any_big(), out, [&](auto use, std::ostream& sink) {
+    using T = typename decltype(use)::type;
+    return evaluate<T>(c, values, stack, ring, fence_value, sink);
+  });
 }
 
 }  // namespace sweepcheck

@@ -238,20 +238,10 @@ std::string check_sheet(const Certificate& cert, Stack& stack, std::ostream& out
   out << "sheet: " << triangles.size() << " triangles and " << prisms.size()
       << " prisms, every cell present, none twice, no zero coefficient (rules 1, 2)\n";
 
-  if (!values.any_big()) {
-    std::ostringstream findings;  // printed once, whichever path finishes
-    try {
-      std::string summary = boundary_and_winding<Checked64>(rows, values, stack, ring, winding, findings);
-      out << findings.str();
-      return summary;
-    } catch (const Rejected&) {
-      out << findings.str();
-      throw;
-    } catch (const std::overflow_error&) {
-      // A sum left 64 bits: redo exactly.
-    }
-  }
-  return boundary_and_winding<Int>(rows, values, stack, ring, winding, out);
+  return fast_then_exact(!values.any_big(), out, [&](auto use, std::ostream& sink) {
+    using T = typename decltype(use)::type;
+    return boundary_and_winding<T>(rows, values, stack, ring, winding, sink);
+  });
 }
 
 }  // namespace sweepcheck

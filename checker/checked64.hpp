@@ -3,8 +3,13 @@
 // 64 bits). Only the operations the checks use.
 #pragma once
 #include <cstdint>
+#include <ostream>
+#include <sstream>
 #include <stdexcept>
 #include <string>
+
+#include "errors.hpp"
+#include "numbers.hpp"
 
 namespace sweepcheck {
 
@@ -35,5 +40,31 @@ class Checked64 {
  private:
   std::int64_t v_ = 0;
 };
+
+template <class T>
+struct Use {  // selects the integer type of a check: Use<Checked64> or Use<Int>
+  using type = T;
+};
+
+// Runs `check(Use<Checked64>{}, out)`, or `check(Use<Int>{}, out)` when some value needs more than
+// 64 bits or a sum overflows. The fast path's findings are buffered so they are printed once,
+// whichever path finishes; a rejection from the fast path is final (it is exact when it is made).
+template <class Check>
+std::string fast_then_exact(bool try_fast, std::ostream& out, Check&& check) {
+  if (try_fast) {
+    std::ostringstream findings;
+    try {
+      std::string summary = check(Use<Checked64>{}, findings);
+      out << findings.str();
+      return summary;
+    } catch (const Rejected&) {
+      out << findings.str();
+      throw;
+    } catch (const std::overflow_error&) {
+      // A sum left 64 bits: redo exactly.
+    }
+  }
+  return check(Use<Int>{}, out);
+}
 
 }  // namespace sweepcheck

@@ -63,6 +63,19 @@ inline std::string rejected(const std::string& input, const std::string& cert) {
   return r.last();
 }
 
+// The room of the positional tests: a 4 x 4 square fence, disks of radius 3/2 every 2 units
+// (consecutive centres 2 apart, 2 <= 3/2 + 3/2), listed counter-clockwise F0 (0,0), F1 (2,0),
+// F2 (4,0), F3 (4,2), F4 (4,4), F5 (2,4), F6 (0,4), F7 (0,2); P = [0,4]^2; horizon [0, 10].
+// `extra` adds mobile sensors.
+inline std::string room(const std::string& extra) {
+  return R"({"format": "sweepcert-scenario-1", "horizon": ["0", "10"],
+  "fence": [{"id": "F0", "at": ["0", "0"], "radius": "1.5"}, {"id": "F1", "at": ["2", "0"], "radius": "1.5"},
+            {"id": "F2", "at": ["4", "0"], "radius": "1.5"}, {"id": "F3", "at": ["4", "2"], "radius": "1.5"},
+            {"id": "F4", "at": ["4", "4"], "radius": "1.5"}, {"id": "F5", "at": ["2", "4"], "radius": "1.5"},
+            {"id": "F6", "at": ["0", "4"], "radius": "1.5"}, {"id": "F7", "at": ["0", "2"], "radius": "1.5"}],
+  "sensors": [)" + extra + "]}";
+}
+
 inline bool starts_with(const std::string& s, const std::string& prefix) { return s.rfind(prefix, 0) == 0; }
 
 }  // namespace sweepcheck_test

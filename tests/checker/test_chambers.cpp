@@ -14,17 +14,6 @@ using Catch::Matchers::StartsWith;
 
 namespace {
 
-// The room: a 4 x 4 square fence, disks of radius 3/2 every 2 units (consecutive centres 2
-// apart, 2 <= 3/2 + 3/2), listed counter-clockwise F0 (0,0), F1 (2,0), F2 (4,0), F3 (4,2),
-// F4 (4,4), F5 (2,4), F6 (0,4), F7 (0,2); P = [0,4]^2. `extra` adds mobile sensors.
-std::string room(const std::string& extra) {
-  return R"({"format": "sweepcert-scenario-1", "horizon": ["0", "10"],
-  "fence": [{"id": "F0", "at": ["0", "0"], "radius": "1.5"}, {"id": "F1", "at": ["2", "0"], "radius": "1.5"},
-            {"id": "F2", "at": ["4", "0"], "radius": "1.5"}, {"id": "F3", "at": ["4", "2"], "radius": "1.5"},
-            {"id": "F4", "at": ["4", "4"], "radius": "1.5"}, {"id": "F5", "at": ["2", "4"], "radius": "1.5"},
-            {"id": "F6", "at": ["0", "4"], "radius": "1.5"}, {"id": "F7", "at": ["0", "2"], "radius": "1.5"}],
-  "sensors": [)" + extra + "]}";
-}
 // One static interior sensor C at (2,2), radius 3/2.
 const std::string kStatic = room(R"({"id": "C", "radius": "1.5", "track": [["0", "2", "2"]]})");
 

@@ -9,17 +9,8 @@ using Catch::Matchers::StartsWith;
 
 namespace {
 
-// A 4 x 4 square fence, disks of radius 3/2 every 2 units (P = [0,4]^2), horizon [0, 10].
-// Without an interior sensor the centre (2,2) is a hole: it is at distance 2 from the nearest
-// fence centres (2,0), (4,2), (2,4), (0,2), and 2^2 - (3/2)^2 = 7/4 > 0.
-std::string room(const std::string& extra) {
-  return R"({"format": "sweepcert-scenario-1", "horizon": ["0", "10"],
-  "fence": [{"id": "F0", "at": ["0", "0"], "radius": "1.5"}, {"id": "F1", "at": ["2", "0"], "radius": "1.5"},
-            {"id": "F2", "at": ["4", "0"], "radius": "1.5"}, {"id": "F3", "at": ["4", "2"], "radius": "1.5"},
-            {"id": "F4", "at": ["4", "4"], "radius": "1.5"}, {"id": "F5", "at": ["2", "4"], "radius": "1.5"},
-            {"id": "F6", "at": ["0", "4"], "radius": "1.5"}, {"id": "F7", "at": ["0", "2"], "radius": "1.5"}],
-  "sensors": [)" + extra + "]}";
-}
+// The room of helpers.hpp without an interior sensor: the centre (2,2) is a hole, at distance 2
+// from the nearest fence centres (2,0), (4,2), (2,4), (0,2), and 2^2 - (3/2)^2 = 7/4 > 0.
 const std::string kHole = room("");
 
 std::string route(const std::string& rows) {
