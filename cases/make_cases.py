@@ -53,3 +53,41 @@ write("column-sweep.json", "Loading hall, robot column sweep (invented)", ["0", 
 # The same sweep with the middle robot missing: a gap at height 5.
 write("column-gap.json", "Loading hall, middle robot missing (invented)", ["0", "20"],
       rectangle_fence(20, 10, 2, "3/2"), [s for s in column if s["id"] != "R5"])
+
+# A depot yard at night, 24 x 12: four guards with radius-2 lamps walk abreast at heights 1.5,
+# 4.5, 7.5 and 10.5 from the west fence to the east fence, stopping at x = 12 for a two-second
+# vehicle check. A floodlight stands at the gate side, (22, 6). Neighbouring guards are 3 apart
+# (< 2 + 2) and the outer guards are 1.5 from the fence line (< 2 + 3/2), so the line of lamps
+# always joins the south fence to the north fence: nothing crosses it, and it ends on the east
+# fence. Expected: no evasion, by a sheet.
+guards = [{"id": f"G{k}", "radius": "2",
+           "track": [["0", "0", y], ["12", "12", y], ["14", "12", y], ["26", "24", y]]}
+          for k, y in enumerate(("3/2", "9/2", "15/2", "21/2"), start=1)]
+write("depot-yard-night.json", "Depot yard at night, four guards walking abreast (invented)",
+      ["0", "26"], rectangle_fence(24, 12, 2, "3/2"),
+      guards + [{"id": "L1", "radius": "2", "track": [["0", "22", "6"]]}])
+
+# A warehouse aisle, 30 x 4: one floor robot with a radius-3 scanner drives down the middle
+# (y = 2) to x = 15 and turns back. The far end is never scanned: the point (27, 2) is at
+# distance sqrt(1 + 4) > 3/2 from the nearest fence sensors (26, 0) and (28, 0) and at least
+# 12 > 3 from the robot. Expected: evasion (standing still there is a route); no sheet.
+write("warehouse-aisle-patrol.json", "Warehouse aisle, robot turns back halfway (invented)",
+      ["0", "30"], rectangle_fence(30, 4, 2, "3/2"),
+      [{"id": "A1", "radius": "3", "track": [["0", "0", "2"], ["15", "15", "2"], ["30", "0", "2"]]}])
+
+# A border corridor, 40 x 8: two drones with radius 5/2 fly east along y = 2 and y = 6, the
+# northern one two seconds behind. Their centres are sqrt(2^2 + 4^2) = sqrt(20) < 5 apart, and
+# each is 2 from its fence line (< 5/2 + 3/2), so the pair always spans the corridor.
+# Expected: no evasion, by a sheet.
+def drone(id_, y, start):
+    return {"id": id_, "radius": "5/2",
+            "track": [[str(start), "0", y], [str(start + 40), "40", y]]}
+
+
+write("border-corridor.json", "Border corridor, two drones flying staggered (invented)",
+      ["0", "42"], rectangle_fence(40, 8, 2, "3/2"), [drone("D1", "2", 0), drone("D2", "6", 2)])
+# The same corridor with the northern drone six seconds behind: centres sqrt(6^2 + 4^2) = sqrt(52)
+# > 5 apart, so a gap opens between the two disks and an intruder slips through it.
+# Expected: evasion.
+write("border-corridor-late.json", "Border corridor, second drone six seconds late (invented)",
+      ["0", "46"], rectangle_fence(40, 8, 2, "3/2"), [drone("D1", "2", 0), drone("D2", "6", 6)])

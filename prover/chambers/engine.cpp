@@ -221,7 +221,7 @@ std::vector<Rational> initial_slab_ends(const Sweep& s) {
       pieces = std::max(pieces, std::ceil(d / (0.5 * s.sensors[i].radius.get_d())));
     }
     long n = static_cast<long>(std::min(pieces, 4096.0));
-    for (long j = 1; j < n; ++j) out.push_back(a + (b - a) * Rational(j, n));
+    for (long j = 1; j < n; ++j) out.push_back(a + (b - a) * fraction(j, n));
     out.push_back(b);
   }
   return out;
@@ -323,7 +323,7 @@ bool find_route(const Region& region, const Square& sq,
     // Wait at the start point until this slab begins; route rows interpolate linearly.
     if (!pts.empty() && route.back()[0] < a) route.push_back({a, start.x, start.y});
     for (std::size_t j = 0; j < pts.size(); ++j) {
-      Rational t = a + (b - a) * Rational(long(j + 1), long(pts.size()));
+      Rational t = a + (b - a) * fraction(long(j + 1), long(pts.size()));
       route.push_back({t, pts[j].x, pts[j].y});
     }
   }

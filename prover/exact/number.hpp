@@ -24,4 +24,12 @@ std::string to_text(const Rational& q);
 // A double near q, for filters and display only.
 inline double approx(const Rational& q) { return q.get_d(); }
 
+// num/den in lowest terms. (mpq_class(num, den) does not reduce, and GMP's rational arithmetic
+// assumes reduced operands: an unreduced value can compare or divide wrongly.)
+inline Rational fraction(long num, long den) {
+  Rational q(num, den);
+  q.canonicalize();
+  return q;
+}
+
 }  // namespace sweepcert

@@ -75,3 +75,14 @@ TEST_CASE("JSON errors name where they are") {
     CHECK(std::string(e.what()).find("64") != std::string::npos);
   }
 }
+
+TEST_CASE("fractions built from integers are in lowest terms") {
+  // GMP's mpq functions require canonical operands (GMP manual, "Rational Number Functions");
+  // 105/5 left unreduced once made a route's times compare and divide wrongly.
+  Rational q = fraction(105, 5);
+  CHECK(q.get_num() == 21);
+  CHECK(q.get_den() == 1);
+  CHECK(fraction(44, 2) == Rational(22));
+  CHECK(fraction(-6, 4) == parse_exact("-3/2", nullptr).value());
+  CHECK(fraction(-6, 4).get_den() == 2);
+}
