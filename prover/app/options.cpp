@@ -13,7 +13,7 @@ const std::vector<CommandSpec>& command_table() {
        "  or, when only contacts are known and they cannot prove coverage, a cocycle (claim\n"
        "  no-sheet). INPUT is a positional scenario (sweepcert-scenario-1) or a contact log\n"
        "  (sweepcert-contacts-1); see schema/README.md."},
-      {"contacts", "sweepcert contacts SCENARIO --every DT -o LOG",
+      {"contacts", "sweepcert contacts SCENARIO --every DT -o LOG [--pairs-only --contact-range R]",
        "Write the contact log that these sensors would record: frames at START + k*DT, at every\n"
        "  waypoint time inside the horizon and at END; pairs and triples decided exactly.\n"
        "  With --pairs-only --contact-range R: pairs within distance R, no triples (schema 2.2)."},
@@ -27,7 +27,8 @@ const std::vector<CommandSpec>& command_table() {
 
 const std::vector<OptionSpec>& option_table() {
   static const std::vector<OptionSpec> table = {
-      {"-o", "FILE", nullptr, "prove contacts import", "where to write the certificate / log (required)"},
+      {"-o", "FILE", nullptr, "prove contacts import",
+       "where to write the certificate / log / scenario (required)"},
       {"--method", "auto|sheet|chambers|route", "auto", "prove",
        "auto: a separating sheet if one exists, else (positional input)\n"
        "time-ordered chambers, else an evasion route; or force one method"},
