@@ -29,7 +29,7 @@ std::string error_of(const std::string& bytes) {
 
 }  // namespace
 
-TEST_CASE("plain records with LF, CRLF and no final line end") {
+TEST_CASE("CSV: plain records with LF or CRLF line ends and blank trailing lines", "[csv]") {
   using Table = std::vector<std::vector<std::string>>;
   Table want = {{"a", "b"}, {"1", "2"}};
   CHECK(texts("a,b\n1,2\n") == want);
@@ -42,7 +42,7 @@ TEST_CASE("plain records with LF, CRLF and no final line end") {
   CHECK(texts("a,") == Table{{"a", ""}});
 }
 
-TEST_CASE("quoted fields: doubled quotes, commas and line breaks inside") {
+TEST_CASE("CSV: quoted fields with doubled quotes and separators inside", "[csv]") {
   auto records = split_csv("t.csv", "id,v\n\"a,\"\"b\"\"\nc\",\"7/3\"\nz,1\n");
   REQUIRE(records.size() == 3);
   CHECK(records[1][0].text == "a,\"b\"\nc");
@@ -57,7 +57,7 @@ TEST_CASE("quoted fields: doubled quotes, commas and line breaks inside") {
   CHECK(records[2][1].column == 3);
 }
 
-TEST_CASE("malformed quoting is refused with line and column") {
+TEST_CASE("CSV: malformed quoting is refused with line and column", "[csv]") {
   CHECK(error_of("a,b\n1,\"2\n3,4\n") == "t.csv:2:3: unterminated quoted field (no closing '\"')");
   CHECK(error_of("a,b\n\"1\"x,2\n") == "t.csv:2:4: text after the closing quote of a quoted field");
   CHECK(error_of("a,b\n1\"2,3\n") == "t.csv:2:2: quote inside an unquoted field");
