@@ -39,6 +39,56 @@ Rational number_at(const CsvTable& table, std::size_t row, std::size_t k, const 
   return *q;
 }
 
+std::pair<Rational, Rational> parse_horizon(const std::string& horizon) {
+  auto colon = horizon.find(':');
+  if (colon == std::string::npos || horizon.find(':', colon + 1) != std::string::npos)
+    throw UsageError("--horizon must be START:END, got \"" + horizon + "\"");
+  std::string why;
+  auto start = parse_exact(horizon.substr(0, colon), &why);
+  if (!start) throw UsageError("--horizon START \"" + horizon.substr(0, colon) + "\": " + why);
+  auto end = parse_exact(horizon.substr(colon + 1), &why);
+  if (!end) throw UsageError("--horizon END \"" + horizon.substr(colon + 1) + "\": " + why);
+  return {*start, *end};  // START < END is checked with the scenario
+}
+
+// Mobile sensors in the order of their first row; rows of one sensor sorted by time, one radius
+// per sensor, no two rows of a sensor at the same time, no id shared with the fence.
+std::vector<Mobile> gather_mobiles(const CsvTable& tracks, const CsvTable& fence) {
+  std::map<std::string, std::size_t> fence_line_of, index;
+  for (std::size_t r = 0; r < fence.rows.size(); ++r)
+    fence_line_of.emplace(fence.get(r, 0).text, fence.get(r, 0).line);
+  std::vector<Mobile> mobiles;
+  for (std::size_t r = 0; r < tracks.rows.size(); ++r) {
+    const CsvField& id = tracks.get(r, 0);
+    if (auto f = fence_line_of.find(id.text); f != fence_line_of.end())
+      throw InputError(tracks.where(id), "mobile sensor id \"" + id.text + "\" is also a fence id (" +
+                                             fence.path + " line " + std::to_string(f->second) + ")");
+    Rational radius = number_at(tracks, r, 4, "radius");
+    auto [it, fresh] = index.emplace(id.text, mobiles.size());
+    if (fresh) mobiles.push_back({id.text, radius, id.line, {}});
+    Mobile& m = mobiles[it->second];
+    if (radius != m.radius)
+      throw InputError(tracks.where(tracks.get(r, 4)),
+                       "sensor \"" + m.id + "\" has radius " + to_text(radius) + " here but " +
+                           to_text(m.radius) + " on line " + std::to_string(m.radius_line) +
+                           " (one radius per sensor)");
+    m.rows.push_back({number_at(tracks, r, 1, "t"), number_at(tracks, r, 2, "x"),
+                      number_at(tracks, r, 3, "y"), id.line});
+  }
+  for (Mobile& m : mobiles) {
+    std::stable_sort(m.rows.begin(), m.rows.end(), [](const Row& a, const Row& b) { return a.t < b.t; });
+    for (std::size_t k = 1; k < m.rows.size(); ++k)
+      if (m.rows[k - 1].t == m.rows[k].t) {
+        std::size_t l1 = std::min(m.rows[k - 1].line, m.rows[k].line);
+        std::size_t l2 = std::max(m.rows[k - 1].line, m.rows[k].line);
+        throw InputError(tracks.path + ":" + std::to_string(l2),
+                         "sensor \"" + m.id + "\" has two rows at t = " + to_text(m.rows[k].t) +
+                             " (lines " + std::to_string(l1) + " and " + std::to_string(l2) + ")");
+      }
+  }
+  return mobiles;
+}
+
 // The CSV place of a JSON pointer into the produced scenario, or "" if there is none.
 struct LineMap {
   std::string fence_path, tracks_path;
@@ -65,15 +115,7 @@ int run_import(const ParsedArgs& args) {
   if (args.positional.size() != 1) throw UsageError("import takes exactly one TRACKS.csv file");
   for (const char* needed : {"--fence", "--horizon", "-o"})
     if (!args.has(needed)) throw UsageError(std::string("import needs ") + needed);
-  const std::string& horizon = args.get("--horizon");
-  auto colon = horizon.find(':');
-  if (colon == std::string::npos || horizon.find(':', colon + 1) != std::string::npos)
-    throw UsageError("--horizon must be START:END, got \"" + horizon + "\"");
-  std::string why;
-  auto start = parse_exact(horizon.substr(0, colon), &why);
-  if (!start) throw UsageError("--horizon START \"" + horizon.substr(0, colon) + "\": " + why);
-  auto end = parse_exact(horizon.substr(colon + 1), &why);
-  if (!end) throw UsageError("--horizon END \"" + horizon.substr(colon + 1) + "\": " + why);
+  auto [start, end] = parse_horizon(args.get("--horizon"));
 
   LineMap map;
   map.fence_path = args.get("--fence");
@@ -87,11 +129,9 @@ int run_import(const ParsedArgs& args) {
     append_json_string(text, args.get("--title"));
     text += ",\n";
   }
-  text += " \"horizon\": [\"" + to_text(*start) + "\", \"" + to_text(*end) + "\"],\n \"fence\": [";
-  std::map<std::string, std::size_t> fence_line_of;
+  text += " \"horizon\": [\"" + to_text(start) + "\", \"" + to_text(end) + "\"],\n \"fence\": [";
   for (std::size_t r = 0; r < fence.rows.size(); ++r) {
     const CsvField& id = fence.get(r, 0);
-    fence_line_of.emplace(id.text, id.line);
     map.fence_lines.push_back(id.line);
     text += r ? ",\n  {\"id\": " : "\n  {\"id\": ";
     append_json_string(text, id.text);
@@ -101,42 +141,16 @@ int run_import(const ParsedArgs& args) {
   }
   text += "\n ],\n \"sensors\": [";
 
-  // Mobile sensors in the order of their first row; rows of one sensor sorted by time.
-  std::vector<Mobile> mobiles;
-  std::map<std::string, std::size_t> index;
-  for (std::size_t r = 0; r < tracks.rows.size(); ++r) {
-    const CsvField& id = tracks.get(r, 0);
-    if (auto f = fence_line_of.find(id.text); f != fence_line_of.end())
-      throw InputError(tracks.where(id), "mobile sensor id \"" + id.text + "\" is also a fence id (" +
-                                             map.fence_path + " line " + std::to_string(f->second) + ")");
-    Rational radius = number_at(tracks, r, 4, "radius");
-    auto [it, fresh] = index.emplace(id.text, mobiles.size());
-    if (fresh) mobiles.push_back({id.text, radius, id.line, {}});
-    Mobile& m = mobiles[it->second];
-    if (radius != m.radius)
-      throw InputError(tracks.where(tracks.get(r, 4)),
-                       "sensor \"" + m.id + "\" has radius " + to_text(radius) + " here but " +
-                           to_text(m.radius) + " on line " + std::to_string(m.radius_line) +
-                           " (one radius per sensor)");
-    m.rows.push_back({number_at(tracks, r, 1, "t"), number_at(tracks, r, 2, "x"),
-                      number_at(tracks, r, 3, "y"), id.line});
-  }
+  std::vector<Mobile> mobiles = gather_mobiles(tracks, fence);
   std::size_t waypoints = 0;
   for (std::size_t i = 0; i < mobiles.size(); ++i) {
-    Mobile& m = mobiles[i];
-    std::stable_sort(m.rows.begin(), m.rows.end(), [](const Row& a, const Row& b) { return a.t < b.t; });
+    const Mobile& m = mobiles[i];
     map.track_lines.emplace_back();
     text += i ? ",\n  {\"id\": " : "\n  {\"id\": ";
     append_json_string(text, m.id);
     text += ", \"radius\": \"" + to_text(m.radius) + "\", \"track\": [";
     for (std::size_t k = 0; k < m.rows.size(); ++k) {
       const Row& w = m.rows[k];
-      if (k && m.rows[k - 1].t == w.t) {
-        std::size_t l1 = std::min(w.line, m.rows[k - 1].line), l2 = std::max(w.line, m.rows[k - 1].line);
-        throw InputError(map.tracks_path + ":" + std::to_string(l2),
-                         "sensor \"" + m.id + "\" has two rows at t = " + to_text(w.t) + " (lines " +
-                             std::to_string(l1) + " and " + std::to_string(l2) + ")");
-      }
       map.track_lines.back().push_back(w.line);
       text += (k ? ", [\"" : "[\"") + to_text(w.t) + "\", \"" + to_text(w.x) + "\", \"" +
               to_text(w.y) + "\"]";
@@ -157,7 +171,7 @@ int run_import(const ParsedArgs& args) {
   if (!args.has("--quiet"))
     std::printf("wrote %s: %zu fence sensors, %zu mobile sensors with %zu waypoints, horizon [%s, %s]\n",
                 args.get("-o").c_str(), fence.rows.size(), mobiles.size(), waypoints,
-                to_text(*start).c_str(), to_text(*end).c_str());
+                to_text(start).c_str(), to_text(end).c_str());
   return kOk;
 }
 
