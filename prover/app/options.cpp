@@ -13,16 +13,22 @@ const std::vector<CommandSpec>& command_table() {
        "  or, when only contacts are known and they cannot prove coverage, a cocycle (claim\n"
        "  no-sheet). INPUT is a positional scenario (sweepcert-scenario-1) or a contact log\n"
        "  (sweepcert-contacts-1); see schema/README.md."},
-      {"contacts", "sweepcert contacts SCENARIO --every DT -o LOG",
+      {"contacts", "sweepcert contacts SCENARIO --every DT -o LOG [--pairs-only --contact-range R]",
        "Write the contact log that these sensors would record: frames at START + k*DT, at every\n"
-       "  waypoint time inside the horizon and at END; pairs and triples decided exactly."},
+       "  waypoint time inside the horizon and at END; pairs and triples decided exactly.\n"
+       "  With --pairs-only --contact-range R: pairs within distance R, no triples (schema 2.2)."},
+      {"import", "sweepcert import TRACKS.csv --fence FENCE.csv --horizon START:END -o SCENARIO",
+       "Write a positional scenario from CSV tables: TRACKS with columns sensor,t,x,y,radius\n"
+       "  (one row per waypoint, any order), FENCE with sensor,x,y,radius (rows in cyclic\n"
+       "  order). Numbers are exact (schema 1.1); the scenario is validated before it is written."},
   };
   return table;
 }
 
 const std::vector<OptionSpec>& option_table() {
   static const std::vector<OptionSpec> table = {
-      {"-o", "FILE", nullptr, "prove contacts", "where to write the certificate / log (required)"},
+      {"-o", "FILE", nullptr, "prove contacts import",
+       "where to write the certificate / log / scenario (required)"},
       {"--method", "auto|sheet|chambers|route", "auto", "prove",
        "auto: a separating sheet if one exists, else (positional input)\n"
        "time-ordered chambers, else an evasion route; or force one method"},
@@ -33,7 +39,14 @@ const std::vector<OptionSpec>& option_table() {
       {"--rounds", "N", "4", "prove",
        "chambers/route: refinement rounds (halving slabs, finer cells) before giving up"},
       {"--every", "DT", nullptr, "contacts", "spacing of regular frames (an exact number > 0)"},
-      {"--quiet", nullptr, nullptr, "prove contacts", "print nothing but errors"},
+      {"--pairs-only", nullptr, nullptr, "contacts",
+       "log pairs only; triangles come from pairs (needs --contact-range)"},
+      {"--contact-range", "R", nullptr, "contacts",
+       "with --pairs-only: a pair is in contact when its centres are at most R apart"},
+      {"--fence", "FILE", nullptr, "import", "the fence table, sensor,x,y,radius (required)"},
+      {"--horizon", "START:END", nullptr, "import", "the horizon, exact numbers (required)"},
+      {"--title", "TEXT", nullptr, "import", "title of the scenario"},
+      {"--quiet", nullptr, nullptr, "prove contacts import", "print nothing but errors"},
   };
   return table;
 }
