@@ -116,13 +116,14 @@ int run_prove(const ParsedArgs& args) {
     if (problem.empty()) safe_sweep = &shrunk;
     else {
       safe_sweep = nullptr;
-      safe_failures.push_back("no-evasion cannot be certified, " + problem);
+      safe_failures.push_back("no-evasion cannot be certified (" + problem + ")");
     }
     if (!quiet) {
       std::printf("margin:      %s: no-evasion is proved with every radius reduced by %s, a route "
                   "must clear every radius increased by %s\n", m.c_str(), m.c_str(), m.c_str());
       if (!problem.empty())
-        std::printf("             with radii reduced by %s %s\n", m.c_str(), problem.c_str());
+        std::printf("             with radii reduced by %s no-evasion cannot be certified (%s)\n",
+                    m.c_str(), problem.c_str());
     }
   }
 
