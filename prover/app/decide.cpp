@@ -251,7 +251,8 @@ int run_prove(const ParsedArgs& args) {
                  plan.try_chambers && plan.try_route ? "an empty live set nor a route"
                  : plan.try_chambers               ? "an empty live set"
                                                    : "a route",
-                 r.narrowest.c_str(), r.no_route ? " (use --method chambers or auto to certify that)" : "");
+                 r.narrowest.c_str(),
+                 r.no_route ? " (use --method chambers or auto to certify that)" : "");
     return kUndecided;
   }
   if (r.outcome == Outcome::Undecided) {
@@ -259,7 +260,8 @@ int run_prove(const ParsedArgs& args) {
     std::string head;
     if (tried_safe) head = "no evasion is provable with radii reduced by " + m;
     if (want_route)
-      head += (tried_safe ? ", and no route" : "no route") + std::string(" keeps clear of radii increased by ") + m;
+      head += std::string(tried_safe ? ", and no route" : "no route") +
+              " keeps clear of radii increased by " + m;
     auto joined = [](const std::vector<std::string>& v) {
       std::string out;
       for (const auto& s : v) out += (out.empty() ? "" : "; ") + s;
