@@ -36,6 +36,10 @@ const std::vector<OptionSpec>& option_table() {
        "coefficients of the sheet or cocycle: integers (z) or integers mod 2 (z2, faster)"},
       {"--max-frames", "N", "20000", "prove",
        "positional input: at most this many frames when refining time"},
+      {"--margin", "M", "0", "prove",
+       "positional input: prove no-evasion with every radius reduced by M, or a route\n"
+       "clear of every radius increased by M, so that the answer holds even if each\n"
+       "sensor is up to M away from its stated position (exact number >= 0)"},
       {"--rounds", "N", "4", "prove",
        "chambers/route: refinement rounds (halving slabs, finer cells) before giving up"},
       {"--every", "DT", nullptr, "contacts", "spacing of regular frames (an exact number > 0)"},

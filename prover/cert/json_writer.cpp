@@ -60,6 +60,10 @@ void JsonCertificateWriter::begin(const CertificateHeader& h) {
   append_json_string(buf_, h.input_sha256);
   buf_ += ",\n \"input_format\": ";
   append_json_string(buf_, h.input_format);
+  if (h.margin != 0) {
+    buf_ += ",\n \"margin\": ";
+    append_number(buf_, h.margin);
+  }
   buf_ += ",\n \"notes\": ";
   buf_ += h.notes_json.empty() ? "{}" : h.notes_json;
   if (h.method == "sheet" || h.method == "cocycle") {

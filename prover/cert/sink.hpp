@@ -13,6 +13,7 @@ namespace sweepcert {
 struct CertificateHeader {
   std::string claim, method, input_sha256, input_format, ring;
   std::vector<Rational> frames;
+  Rational margin;         // schema §4.1.1; written only when nonzero
   std::string notes_json;  // a JSON object, written as the "notes" value
 };
 

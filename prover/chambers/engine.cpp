@@ -451,11 +451,14 @@ ChamberResult decide_by_chambers(const Sweep& sweep, const ChamberPlan& plan,
       }
     }
     // Where did resolution run out? The slab whose live set was smallest, at a live cell of
-    // the finest size. (With routes only, an empty live set means no route can exist.)
+    // the finest size. (With routes only, an empty live set means no route can exist, at this
+    // resolution or any finer one: refining would not help.)
     if (first_empty) {
       const Slab& s = slabs[first_empty - 1];
       out.narrowest = "no route can exist: the live set is empty between t = " + to_text(s.a) +
-                      " and t = " + to_text(s.b) + " (use --method chambers or auto to certify that)";
+                      " and t = " + to_text(s.b);
+      out.no_route = true;
+      break;
     } else {
       const Slab& s = slabs[narrow_slab];
       std::string where;

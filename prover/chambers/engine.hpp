@@ -42,6 +42,7 @@ struct ChamberResult {
   std::vector<Slab> slabs;                      // NoEvasion: up to the slab whose live set is empty
   std::vector<std::array<Rational, 3>> route;   // Evasion
   std::string narrowest;                        // Undecided: where and when resolution ran out
+  bool no_route = false;                        // Undecided, routes only: a live set emptied
   int rounds_used = 0;
   std::size_t cells = 0;
 };

@@ -89,6 +89,29 @@ std::string sha256_hex(const std::string& bytes) {
   return out;
 }
 
+std::string radius_problem(const Sweep& s, std::size_t* at) {
+  std::size_t where = 0;
+  std::string why;
+  for (std::size_t i = 0; i < s.sensors.size() && why.empty(); ++i)
+    if (s.sensors[i].radius <= 0) {
+      where = i;
+      why = "the radius of " + s.sensors[i].id + " is " + to_text(s.sensors[i].radius) +
+            ", not positive";
+    }
+  for (std::size_t i = 0; i < s.fence_count && why.empty(); ++i) {
+    std::size_t j = (i + 1) % s.fence_count;
+    const auto& a = s.sensors[i];
+    const auto& b = s.sensors[j];
+    if (!disks_meet({a.track[0].x, a.track[0].y}, a.radius, {b.track[0].x, b.track[0].y}, b.radius)) {
+      where = j;
+      why = "fence gap: the disks of " + a.id + " and " + b.id +
+            " do not meet, so the fence edge between them is not covered";
+    }
+  }
+  if (at) *at = where;
+  return why;
+}
+
 Sweep scenario_from(const JsonDoc& doc) {
   Ref root(doc);
   root.expect_object({"format", "title", "horizon", "fence", "sensors"},
@@ -128,14 +151,9 @@ Sweep scenario_from(const JsonDoc& doc) {
     s.sensors.push_back(std::move(sensor));
   });
   s.fence_count = s.sensors.size();
-  for (std::size_t i = 0; i < s.fence_count; ++i) {
-    std::size_t j = (i + 1) % s.fence_count;
-    const auto& a = s.sensors[i];
-    const auto& b = s.sensors[j];
-    if (!disks_meet({a.track[0].x, a.track[0].y}, a.radius, {b.track[0].x, b.track[0].y}, b.radius))
-      fence.item(j).fail("fence gap: the disks of " + a.id + " and " + b.id +
-                         " do not meet, so the fence edge between them is not covered");
-  }
+  std::size_t gap = 0;
+  std::string why = radius_problem(s, &gap);
+  if (!why.empty()) fence.item(gap).fail(why);
   check_simple_polygon(s, fence);
 
   Ref sensors = root.at("sensors");

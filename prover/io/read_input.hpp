@@ -26,4 +26,10 @@ ContactLog parse_contacts(const std::string& bytes);
 
 std::string sha256_hex(const std::string& bytes);
 
+// The rules of §2.1 that depend on the radii, on a sweep already built (the reader's own, or an
+// adjusted one, §4.1.1): every radius > 0, and every two cyclically consecutive fence disks
+// share a point. Returns "" or what is broken, naming the sensor or the pair; `*at` receives
+// the offending sensor's index (for a fence gap, the second disk of the pair).
+std::string radius_problem(const Sweep& s, std::size_t* at = nullptr);
+
 }  // namespace sweepcert

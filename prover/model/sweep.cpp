@@ -26,4 +26,10 @@ std::vector<Rational> Sweep::waypoint_times(const Rational& a, const Rational& b
   return out;
 }
 
+Sweep adjusted(const Sweep& sweep, const Rational& delta) {
+  Sweep out = sweep;
+  for (auto& s : out.sensors) s.radius += delta;
+  return out;
+}
+
 }  // namespace sweepcert

@@ -41,6 +41,11 @@ struct Sweep {
   std::vector<Rational> waypoint_times(const Rational& a, const Rational& b) const;
 };
 
+// The same sweep with every radius, fence and mobile, changed by `delta` (schema §4.1.1): by −M
+// for a no-evasion proof that survives position errors up to M, by +M for a route that does.
+// Radii may drop to zero or below and fence disks may stop meeting; callers validate.
+Sweep adjusted(const Sweep& sweep, const Rational& delta);
+
 using Vertex = std::uint32_t;
 using Pair = std::pair<Vertex, Vertex>;        // a < b
 using Triple = std::array<Vertex, 3>;          // a < b < c
