@@ -16,6 +16,10 @@ const std::vector<CommandSpec>& command_table() {
       {"contacts", "sweepcert contacts SCENARIO --every DT -o LOG",
        "Write the contact log that these sensors would record: frames at START + k*DT, at every\n"
        "  waypoint time inside the horizon and at END; pairs and triples decided exactly."},
+      {"report", "sweepcert report INPUT CERT -o FILE.html [--svg T]",
+       "Draw a certificate over its positional scenario as one self-contained HTML page (sensors\n"
+       "  over time, live set or intruder route, uncovered area); with --svg T, instead a\n"
+       "  standalone SVG snapshot at time T. Displays only: sweepcheck verifies."},
   };
   return table;
 }
@@ -34,6 +38,9 @@ const std::vector<OptionSpec>& option_table() {
        "chambers/route: refinement rounds (halving slabs, finer cells) before giving up"},
       {"--every", "DT", nullptr, "contacts", "spacing of regular frames (an exact number > 0)"},
       {"--quiet", nullptr, nullptr, "prove contacts", "print nothing but errors"},
+      {"-o", "FILE", nullptr, "report", "where to write the page, or the snapshot with --svg (required)"},
+      {"--svg", "T", nullptr, "report",
+       "write an SVG snapshot at time T (exact number in the horizon) instead of the page"},
   };
   return table;
 }
