@@ -28,6 +28,10 @@ const char* const kScopeExcludes =
     "wrongly, intruders that can pass through a sensing disk, and anything outside the horizon. "
     "Such matters belong to site-specific security practice; this report does not replace it.";
 
+const char* const kScopeShort =
+    "Covers the model as given (disks, fence, tracks); not sensor faults, occlusion or wrong logs. "
+    "Follow site-specific security practice.";
+
 std::string html_escape(std::string_view text) {
   std::string out;
   for (char c : text) {
@@ -110,7 +114,7 @@ std::vector<LegendItem> legend(const Scene& s) {
 std::string swatch(const LegendItem& it, double x, double y) {
   const std::string cls = "<" + std::string(it.shape == "area" ? "rect" : it.shape == "dash" ? "polyline"
                                            : it.shape == "tick" ? "line" : "circle") +
-                          " class=\"" + it.cls + "\" ";
+                          " class=\"" + it.cls + " swatch\" ";
   const std::string cx = fmt(x + 11), cy = fmt(y + 7);
   if (it.shape == "disk") return cls + "cx=\"" + cx + "\" cy=\"" + cy + "\" r=\"6\"/>";
   if (it.shape == "marker") return cls + "cx=\"" + cx + "\" cy=\"" + cy + "\" r=\"4.5\"/>";

@@ -17,6 +17,7 @@ namespace sweepcert {
 extern const char* const kSceneCss;
 extern const char* const kScopeCovers;
 extern const char* const kScopeExcludes;
+extern const char* const kScopeShort;  // one line, for the snapshot's caption
 
 std::string html_escape(std::string_view text);
 std::string fmt(double v);  // compact decimal for drawing (7 significant digits)
@@ -39,7 +40,8 @@ struct LegendItem {
   std::string text;
 };
 std::vector<LegendItem> legend(const Scene& s);
-// A swatch 22 x 14 px with its top-left corner at (x, y), in plain (unflipped) SVG units.
+// A swatch 22 x 14 px with its top-left corner at (x, y), in plain (unflipped) SVG units. It
+// carries the class it explains plus "swatch", so counts of drawn elements can leave it out.
 std::string swatch(const LegendItem& item, double x, double y);
 
 }  // namespace sweepcert

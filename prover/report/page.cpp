@@ -314,11 +314,11 @@ std::string html_page(const Scene& s) {
     h += "<li><svg width=\"22\" height=\"14\">" + swatch(it, 0, 0) + "</svg><span>" + html_escape(it.text) +
          "</span></li>\n";
   if (chambers)
-    h += "<li><svg width=\"22\" height=\"14\"><polyline class=\"series-live\" points=\"1,10 21,4\"/></svg>"
+    h += "<li><svg width=\"22\" height=\"14\"><polyline class=\"series-live swatch\" points=\"1,10 21,4\"/></svg>"
          "<span>Live area (area of the live cells) per slab</span></li>\n"
-         "<li><svg width=\"22\" height=\"14\"><polyline class=\"series-regions\" points=\"1,10 21,4\"/></svg>"
+         "<li><svg width=\"22\" height=\"14\"><polyline class=\"series-regions swatch\" points=\"1,10 21,4\"/></svg>"
          "<span>Live regions (connected components of the live cells under touching) per slab</span></li>\n";
-  h += "<li><svg width=\"22\" height=\"14\"><polyline class=\"series\" points=\"1,10 21,4\"/></svg>"
+  h += "<li><svg width=\"22\" height=\"14\"><polyline class=\"series swatch\" points=\"1,10 21,4\"/></svg>"
        "<span>Uncovered area: area inside P covered by no disk</span></li>\n</ul>\n";
   h += "<h2>What this certificate covers</h2>\n<p>" + html_escape(kScopeCovers) + "</p>\n";
   h += "<h2>What it does not cover</h2>\n<p>" + html_escape(kScopeExcludes) + "</p>\n";

@@ -40,6 +40,7 @@ std::string svg_snapshot(const Scene& s, const Sweep& sweep, const Rational& t) 
   const View v = scene_view(s);
   const double W = 900, SH = W * v.h / v.w;  // scene area in px, aspect kept
   std::vector<std::string> claim = wrap(s.headline + ". " + s.claim_words, 130);
+  for (const std::string& line : wrap(kScopeShort, 130)) claim.push_back(line);
   std::vector<LegendItem> items = legend(s);
   items.erase(std::remove_if(items.begin(), items.end(), [](const LegendItem& i) { return i.cls == "cursor" || i.cls == "frame-tick"; }),
               items.end());
