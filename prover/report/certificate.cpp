@@ -106,7 +106,7 @@ CertView read_certificate(const std::string& bytes, const Input& input) {
     table.expect_array(0);
     table.for_each([&](const Ref& id) { v.table.push_back(id.id()); });
     Ref slabs = root.at("slabs");
-    slabs.expect_array(1);
+    v.slabs.reserve(slabs.expect_array(1));  // slabs hold quadtrees: grow once, never copy
     slabs.for_each([&](const Ref& s) {
       s.expect_object({"t", "tree"}, {"t", "tree"});
       Ref t = s.at("t");

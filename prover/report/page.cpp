@@ -49,7 +49,7 @@ aside { flex: 1.3; min-width: 260px; max-width: 440px; }
 .charts { display: flex; flex-wrap: wrap; gap: 10px; margin-top: 8px; }
 figure { margin: 0; flex: 1; min-width: 240px; background: #fff; border: 1px solid #ddd6c4; padding: 6px; }
 figcaption { font-weight: 600; }
-figure svg { width: 100%; height: auto; }
+figure svg { width: 100%; height: auto; max-height: 190px; }
 .axis { stroke: #8d8d8d; stroke-width: 1px; }
 .label { font-size: 11px; fill: #555; }
 #script-errors { color: #a00; margin: 0; padding: 6px 22px; background: #fee; }

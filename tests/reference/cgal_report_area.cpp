@@ -25,6 +25,7 @@
 #include <fstream>
 #include <iostream>
 #include <list>
+#include <random>
 #include <nlohmann/json.hpp>
 #include <sstream>
 #include <type_traits>
@@ -176,4 +177,35 @@ TEST_CASE("report uncovered-area samples agree with CGAL's exact region", "[cgal
     INFO("t = " << sweepcert::to_text(t));
     CHECK(std::abs(got - expected) <= tolerance);
   }
+}
+
+TEST_CASE("uncovered_area agrees with CGAL on random and degenerate configurations", "[cgal][report]") {
+  // Random disks on an L-shaped P (12 x 8 without its 6 x 4 north-east block, area 72). Centres and
+  // radii on a grid of quarters, so exact tangencies, circles through polygon vertices, repeated
+  // disks and three circles through one point all occur; the stated tolerance must hold anyway.
+  std::mt19937_64 rng(7);
+  auto quarter = [&](int lo, int hi) { return Rational(std::uniform_int_distribution<int>(lo, hi)(rng), 4); };
+  std::vector<std::pair<Rational, Rational>> region = {{0, 0}, {12, 0}, {12, 4}, {6, 4}, {6, 8}, {0, 8}};
+  std::vector<sweepcert::Vec2> poly;
+  for (const auto& [x, y] : region) poly.push_back({x.get_d(), y.get_d()});
+  const double tolerance = sweepcert::kAreaRelTolerance * 72;
+  double worst = 0;
+  for (int trial = 0; trial < 60; ++trial) {
+    std::vector<ExactDisk> disks;
+    std::vector<sweepcert::Circle> circles;
+    int n = std::uniform_int_distribution<int>(1, 25)(rng);
+    for (int i = 0; i < n; ++i) {
+      ExactDisk d{quarter(-4, 52), quarter(-4, 36), quarter(2, 12)};
+      if (i > 0 && trial % 5 == 0) d = disks[std::size_t(i) / 2];  // repeats
+      disks.push_back(d);
+      circles.push_back({{d.x.get_d(), d.y.get_d()}, d.r.get_d()});
+    }
+    double expected = cgal_uncovered_area(region, disks);
+    double got = sweepcert::uncovered_area(poly, circles);
+    worst = std::max(worst, std::abs(got - expected));
+    INFO("trial " << trial << ": " << n << " disks");
+    CHECK(std::abs(got - expected) <= tolerance);
+  }
+  std::cout << "[cgal_report_area] 60 random configurations: largest difference " << worst << " (tolerance "
+            << tolerance << ")\n";
 }
