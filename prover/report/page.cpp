@@ -164,12 +164,13 @@ const char* const kMainScript = R"(<script>
       disks[i].setAttribute('cx', p[0]);
       disks[i].setAttribute('cy', p[1]);
     });
+    var words = [];
     if (intruder) {
       var q = along(D.route, t);
       intruder.setAttribute('cx', q[0]);
       intruder.setAttribute('cy', q[1]);
+      words.push('intruder at (' + num(q[0]) + ', ' + num(q[1]) + ')');
     }
-    var words = [];
     var k = before(A.t, t), area;
     if (k >= 0 && A.t[k] === t) area = 'uncovered area ' + num(A.uncovered[k]);
     else {

@@ -9,7 +9,7 @@
 set -euo pipefail
 prover=$1 cases=$2 work=$3
 here=$(cd "$(dirname "$0")" && pwd)
-browser=$(command -v chromium || true)
+browser=${CHROMIUM-$(command -v chromium || true)}  # CHROMIUM= (empty) forces the skip path
 if [[ -z $browser ]]; then
   echo "SKIP: chromium is not installed (scripts/install-deps.sh installs the Debian package chromium)"
   exit 77
@@ -26,6 +26,7 @@ render() {  # render NAME T [--live some|none]: dump the DOM of NAME.html at #t=
   local dom="$work/$name.t$t.dom.html"
   timeout 120 "$browser" --headless --no-sandbox --disable-gpu --user-data-dir="$profile" \
     --dump-dom "file://$work/$name.html#t=$t" > "$dom" 2> "$dom.log" || true
+  [[ -s $dom ]] || { echo "chromium wrote no DOM for $name at t = $t; its log ends:"; tail -5 "$dom.log"; }
   python3 "$here/report_check.py" dom "$dom" "$cases/$name.json" "$work/$name.cert.json" "$t" "$@" || fail=1
 }
 
