@@ -15,3 +15,11 @@ if ((${#missing[@]})); then
 else
   echo "== all build dependencies are installed"
 fi
+# Headless browser for the report's page test (tests/e2e/report_browser.sh). Optional: without it
+# that test reports SKIP, so a failure here does not stop the build dependencies above.
+if ! dpkg-query -W -f='${Status}' chromium 2>/dev/null | grep -q "install ok installed"; then
+  echo "== installing: chromium (optional, for the report's browser test)"
+  export DEBIAN_FRONTEND=noninteractive
+  { apt-get update -qq && apt-get install -y -qq --no-install-recommends chromium; } ||
+    echo "== chromium could not be installed; the report's browser test will be skipped"
+fi

@@ -9,5 +9,6 @@ enum ExitCode { kOk = 0, kBadInput = 2, kUndecided = 3, kInternal = 4 };
 int run_prove(const ParsedArgs& args);
 int run_contacts(const ParsedArgs& args);
 int run_import(const ParsedArgs& args);
+int run_report(const ParsedArgs& args);
 
 }  // namespace sweepcert

@@ -27,6 +27,7 @@ int main(int argc, char** argv) {
     if (args.command == "prove") return run_prove(args);
     if (args.command == "contacts") return run_contacts(args);
     if (args.command == "import") return run_import(args);
+    if (args.command == "report") return run_report(args);
   } catch (const UsageError& e) {
     std::fprintf(stderr, "sweepcert: %s\nTry 'sweepcert --help'.\n", e.what());
     return kBadInput;

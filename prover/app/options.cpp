@@ -21,14 +21,18 @@ const std::vector<CommandSpec>& command_table() {
        "Write a positional scenario from CSV tables: TRACKS with columns sensor,t,x,y,radius\n"
        "  (one row per waypoint, any order), FENCE with sensor,x,y,radius (rows in cyclic\n"
        "  order). Numbers are exact (schema 1.1); the scenario is validated before it is written."},
+      {"report", "sweepcert report INPUT CERT -o FILE.html [--svg T]",
+       "Draw a certificate over its positional scenario as one self-contained HTML page (sensors\n"
+       "  over time, live set or intruder route, uncovered area); with --svg T, instead a\n"
+       "  standalone SVG snapshot at time T. Displays only: sweepcheck verifies."},
   };
   return table;
 }
 
 const std::vector<OptionSpec>& option_table() {
   static const std::vector<OptionSpec> table = {
-      {"-o", "FILE", nullptr, "prove contacts import",
-       "where to write the certificate / log / scenario (required)"},
+      {"-o", "FILE", nullptr, "prove contacts import report",
+       "where to write the certificate / log / scenario / page or snapshot (required)"},
       {"--method", "auto|sheet|chambers|route", "auto", "prove",
        "auto: a separating sheet if one exists, else (positional input)\n"
        "time-ordered chambers, else an evasion route; or force one method"},
@@ -51,6 +55,8 @@ const std::vector<OptionSpec>& option_table() {
       {"--horizon", "START:END", nullptr, "import", "the horizon, exact numbers (required)"},
       {"--title", "TEXT", nullptr, "import", "title of the scenario"},
       {"--quiet", nullptr, nullptr, "prove contacts import", "print nothing but errors"},
+      {"--svg", "T", nullptr, "report",
+       "write an SVG snapshot at time T (exact number in the horizon) instead of the page"},
   };
   return table;
 }
