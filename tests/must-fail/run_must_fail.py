@@ -82,6 +82,8 @@ def check_case(checker, root, name):
         problems.append("expected exactly one REJECTED line, the last line of the output")
     if any(l.startswith("ACCEPTED") for l in lines):
         problems.append("the output has an ACCEPTED line")
+    if err.strip():  # a rejection is reported on stdout alone; stderr would be a crash or sanitizer report
+        problems.append("unexpected output on stderr")
     line = rejected[0] if rejected else ""
     for m in messages:
         if m not in line:
@@ -104,7 +106,7 @@ def check_control(checker, root, name):
     rc, out, err = run(checker, root, input_rel, os.path.join(directory, "cert.json"))
     lines = out.splitlines()
     last = lines[-1] if lines else ""
-    if rc == 0 and last.startswith("ACCEPTED") and accepted in last:
+    if rc == 0 and last.startswith("ACCEPTED") and accepted in last and not err.strip():
         return []
     return [f"valid/{name}: exit code {rc}, last line '{last}' (expected ACCEPTED with '{accepted}')"
             + (" | stderr: " + err.strip() if err.strip() else "")]
