@@ -22,7 +22,7 @@ void claim(const Account& a, std::ostream& out) {
   if (c->method == "sheet" || c->method == "cocycle") out << " over the ring " << ring_words(c->ring);
   out << ".\n";
   if (c->claim == "no-evasion") {
-    out << "  In words: nobody can move continuously inside the fence polygon from the start to the end of the\n"
+    out << "  In words: nobody can move continuously inside the fenced area from the start to the end of the\n"
            "  time covered while staying outside every sensor's disk at every moment";
     if (c->method == "sheet" && positional(in))
       out << " (covered: the frames " << span << ", hence the whole horizon)";
@@ -130,7 +130,7 @@ void checks(const Account& a, std::ostream& out) {
   if (t.radii_adjusted > 0) {
     out << "  margin: " << t.radii_adjusted << " radii " << (c->claim == "evasion" ? "grown" : "shrunk") << " by "
         << to_text(c->margin);
-    if (c->claim == "no-evasion") out << ", all > 0; " << t.fence_links_rechecked << " fence links re-checked";
+    if (c->claim == "no-evasion") out << " and found > 0; " << t.fence_links_rechecked << " fence links re-checked";
     out << "\n";
   }
   if (c->method == "sheet" || c->method == "cocycle") {
@@ -154,8 +154,8 @@ void checks(const Account& a, std::ostream& out) {
       out << "  boundary: " << t.faces_summed << " faces summed into " << t.boundary_cells << " cells; the "
           << t.cylinder_cells << " nonzero ones all lie on the fence cylinder\n";
     if (t.fence_edges_wound == in.fence.size())
-      out << "  winding: the boundary winds " << c->members.need("winding").text() << " times along each of the "
-          << t.fence_edges_wound << " fence edges, i.e. around the fence loop\n";
+      out << "  winding: winding number " << c->members.need("winding").text() << " along each of the "
+          << t.fence_edges_wound << " fence edges (the boundary goes around the fence loop)\n";
   } else if (c->method == "cocycle") {
     out << "  cochain: " << t.edge_values << " edge values, " << t.vertical_values
         << " vertical values, each on a cell that exists\n";
@@ -185,7 +185,7 @@ void checks(const Account& a, std::ostream& out) {
     out << "\n";
     if (t.route_starts_inside)
       out << "  clearance: " << t.pieces_exact << " pieces checked exactly, " << t.pieces_filtered
-          << " passed by the integer box filter; " << t.route_sensors << " of " << in.vertex_count()
+          << " cleared by integer bounding boxes (farther apart than the radius); " << t.route_sensors << " of " << in.vertex_count()
           << " sensors kept clear on every piece\n";
   }
 }

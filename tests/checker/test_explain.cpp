@@ -122,7 +122,7 @@ TEST_CASE("--explain on a positional sheet", "[explain][sheet]") {
   // spokes [C, F_i]: 48 cells. Nonzero: only L_0's 8 edges (the rest cancel as in d above).
   CHECK(line(r.out, "  boundary:") == "  boundary: " + std::to_string(3 * T + 4 * P) +
                                           " faces summed into 48 cells; the 8 nonzero ones all lie on the fence cylinder");
-  CHECK_THAT(line(r.out, "  winding:"), StartsWith("  winding: the boundary winds 1 times along each of the 8 fence edges"));
+  CHECK_THAT(line(r.out, "  winding:"), StartsWith("  winding: winding number 1 along each of the 8 fence edges"));
 
   // Without --explain nothing of the account is printed.
   Run plain = run(input, cert);
@@ -216,7 +216,7 @@ TEST_CASE("--explain on chambers, with a margin", "[explain][chambers]") {
   CHECK(line(r.out, "  claim:") == "  claim: no-evasion, by the method \"chambers\".");
   CHECK(line(r.out, "  margin:") == "  margin: 1/20. Checked with every radius shrunk to r - 1/20, so the conclusion still holds");
   // 9 sensors, 8 fence links.
-  CHECK(line(r.out, "  margin: 9") == "  margin: 9 radii shrunk by 1/20, all > 0; 8 fence links re-checked");
+  CHECK(line(r.out, "  margin: 9") == "  margin: 9 radii shrunk by 1/20 and found > 0; 8 fence links re-checked");
   CHECK(line(r.out, "  square:") == "  square: holds 8 fence centres; sensor table: 9 ids; slabs: 2 consecutive within the horizon");
   CHECK(line(r.out, "  cells:") == "  cells: " + std::to_string(2 * leaves) + " in 2 slabs");
   // Every sensor stands still: one distinct disk per slab, so 4 corner tests per covered cell.
@@ -260,11 +260,11 @@ TEST_CASE("--explain on a route, with a margin", "[explain][route]") {
   CHECK(line(r.out, "  route:") == "  route: 3 rows; the start lies strictly inside the fence polygon");
   // Pieces: each fence sensor has no waypoint inside the horizon, so its pieces are the 2 route
   // legs: 16. N's waypoints 4 and 6 (t=0 is not strictly inside) and the route time 5 cut
-  // [0,10] into [0,4], [4,5], [5,6], [6,10]: 4. In all 20, tested exactly or passed by the filter.
+  // [0,10] into [0,4], [4,5], [5,6], [6,10]: 4. In all 20, tested exactly or cleared by the boxes.
   const std::string clearance = line(r.out, "  clearance:");
   unsigned long exact = 0, filtered = 0, clear = 0, all = 0;
   REQUIRE(std::sscanf(clearance.c_str(),
-                      "  clearance: %lu pieces checked exactly, %lu passed by the integer box filter; %lu of %lu sensors",
+                      "  clearance: %lu pieces checked exactly, %lu cleared by integer bounding boxes (farther apart than the radius); %lu of %lu sensors",
                       &exact, &filtered, &clear, &all) == 4);
   CHECK(exact + filtered == 20);
   CHECK(clear == 9);
