@@ -22,8 +22,8 @@ void claim(const Account& a, std::ostream& out) {
   if (c->method == "sheet" || c->method == "cocycle") out << " over the ring " << ring_words(c->ring);
   out << ".\n";
   if (c->claim == "no-evasion") {
-    out << "  In words: nobody can move continuously inside the fenced area from the start to the end of the\n"
-           "  time covered while staying outside every sensor's disk at every moment";
+    out << "  In words, it asserts: nobody can move continuously inside the fenced area from the start to the\n"
+           "  end of the time covered while staying outside every sensor's disk at every moment";
     if (c->method == "sheet" && positional(in))
       out << " (covered: the frames " << span << ", hence the whole horizon)";
     else if (c->method == "sheet")
@@ -32,14 +32,15 @@ void claim(const Account& a, std::ostream& out) {
       out << " (covered: the slabs, see the last line, hence the whole horizon)";
     out << ".\n";
   } else if (c->claim == "no-sheet") {
-    out << "  In words: the coverage recorded on the " << c->frames.size() << " frames " << span
+    out << "  In words, it asserts: the coverage recorded on the " << c->frames.size() << " frames " << span
         << " cannot be assembled into a sheet over this ring.\n"
            "  This is not a statement that an intruder can evade: only that this kind of proof is impossible on\n"
            "  these frames. An evasion path may or may not exist.\n";
   } else {
-    out << "  In words: an evasion path exists: the route in the certificate starts strictly inside the fence\n"
-           "  polygon and stays strictly outside every sensor's disk over the whole horizon ["
-        << to_text(in.horizon_start) << ", " << to_text(in.horizon_end) << "]. The sweep does not guarantee detection.\n";
+    out << "  In words, it asserts: an evasion path exists; the route in the certificate starts strictly inside\n"
+           "  the fence polygon and stays strictly outside every sensor's disk over the whole horizon ["
+        << to_text(in.horizon_start) << ", " << to_text(in.horizon_end) << "].\n"
+           "  The sweep does not guarantee detection.\n";
   }
   if (c->method == "sheet")
     out << "  How: a sheet, a chain of covered triangles and prisms in space-time whose boundary runs around the\n"
