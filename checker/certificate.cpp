@@ -1,6 +1,7 @@
 #include "certificate.hpp"
 
 #include <algorithm>
+#include <optional>
 
 #include "errors.hpp"
 
@@ -82,7 +83,7 @@ bool is_lower_hex(std::string_view s) {
 }
 
 // §4.2.
-void check_frames(const Certificate& cert, const Input& in, std::size_t& log_start) {
+void check_frames(const Certificate& cert, const Input& in, std::size_t& log_start, Tally& tally) {
   const std::vector<Rat>& f = cert.frames;
   if (in.kind == InputKind::Scenario) {
     for (std::size_t k = 0; k < f.size(); ++k)
@@ -91,11 +92,15 @@ void check_frames(const Certificate& cert, const Input& in, std::size_t& log_sta
                                                                  to_text(in.horizon_end) + "] (§4.2)");
     for (std::size_t v = 0; v < in.sensors.size(); ++v) {
       if (in.is_fence[v]) continue;
-      for (const Rat& t : in.sensors[v].times)
-        if (f.front() < t && t < f.back() && !std::binary_search(f.begin(), f.end(), t))
+      for (const Rat& t : in.sensors[v].times) {
+        if (!(f.front() < t && t < f.back())) continue;
+        if (!std::binary_search(f.begin(), f.end(), t))
           throw Rejected("/frames", "sensor \"" + in.names[v] + "\" waypoint t=" + to_text(t),
                          "waypoint time strictly between the first and last frame is not a frame (§4.2)");
+        ++tally.waypoints_checked;
+      }
     }
+    tally.frames_checked = f.size();
     return;
   }
   auto it = std::lower_bound(in.times.begin(), in.times.end(), f.front());
@@ -110,16 +115,32 @@ void check_frames(const Certificate& cert, const Input& in, std::size_t& log_sta
                      "must equal the time of log frame " + std::to_string(log_start + k) + ", t=" +
                          to_text(in.times[log_start + k]) + ": frames must be a contiguous run of the log's frames (§4.2)");
   }
+  tally.frames_checked = f.size();
+}
+
+// §4.1.1: the optional margin. Allowed on positional sheets, chambers and routes only.
+void read_margin(Certificate& cert, const Input& in) {
+  std::optional<Ref> v = cert.members.get("margin");
+  if (!v) return;
+  if (cert.method == "cocycle")
+    throw Rejected("/margin", "", "a margin is not allowed on a cocycle certificate (§4.1.1)");
+  if (in.kind != InputKind::Scenario)
+    throw Rejected("/margin", "", "a margin needs a positional scenario (sweepcert-scenario-1) as input, not a contact "
+                                  "log (§4.1.1)");
+  cert.margin = get_rational(*v, "/margin");
+  if (cert.margin < 0) throw Rejected("/margin", "M=" + to_text(cert.margin), "the margin must be >= 0 (§4.1.1)");
+  cert.has_margin = true;
 }
 
 }  // namespace
 
-Certificate read_header(Ref root, const Input& in, const std::string& input_sha256, std::ostream& out) {
+Certificate read_header(Ref root, const Input& in, const std::string& input_sha256, std::ostream& out,
+                        Tally& tally) {
   try {
     Certificate cert{Members(root, "", {"format", "claim", "method", "input_sha256", "input_format", "ring", "frames",
                                         "notes", "winding", "triangles", "prisms", "fence_value", "edges", "verticals",
-                                        "square", "sensors", "slabs", "route"}),
-                     "", "", Ring::Z, {}, 0};
+                                        "square", "sensors", "slabs", "route", "margin"}),
+                     "", "", Ring::Z, {}, 0, false, Rat(0)};
     const Members& m = cert.members;
     one_of(m, "format", {"sweepcert-certificate-1"});
     cert.claim = one_of(m, "claim", {"no-evasion", "no-sheet", "evasion"});
@@ -154,11 +175,17 @@ Certificate read_header(Ref root, const Input& in, const std::string& input_sha2
       if (in.kind != InputKind::Scenario)
         throw Rejected("/input_format", "", "method \"" + cert.method +
                                                 "\" needs a positional scenario (sweepcert-scenario-1) as input (§4.1)");
+    }
+    read_margin(cert, in);
+    tally.header = true;
+    const std::string margin_text = cert.has_margin ? "; margin " + to_text(cert.margin) : "";
+    if (!stacked) {
       if (auto notes = m.get("notes")) {
         std::string dup = json::find_duplicate_key(*notes, "/notes");
         if (!dup.empty()) throw Rejected(dup, "", "duplicated key (§1.4)");
       }
-      out << "certificate: claim " << cert.claim << " by " << cert.method << "; hash and input format match\n";
+      out << "certificate: claim " << cert.claim << " by " << cert.method << margin_text
+          << "; hash and input format match\n";
       return cert;
     }
     cert.ring = one_of(m, "ring", {"z", "z2"}) == "z" ? Ring::Z : Ring::Z2;
@@ -175,8 +202,8 @@ Certificate read_header(Ref root, const Input& in, const std::string& input_sha2
       std::string dup = json::find_duplicate_key(*notes, "/notes");
       if (!dup.empty()) throw Rejected(dup, "", "duplicated key (§1.4)");
     }
-    check_frames(cert, in, cert.log_start);
-    out << "certificate: claim " << cert.claim << " by " << cert.method << " over " << ring_name(cert.ring) << ", "
+    check_frames(cert, in, cert.log_start, tally);
+    out << "certificate: claim " << cert.claim << " by " << cert.method << margin_text << " over " << ring_name(cert.ring) << ", "
         << cert.frames.size() << " frames, t=" << to_text(cert.frames.front()) << ".." << to_text(cert.frames.back());
     if (in.kind == InputKind::ContactLog)
       out << " (log frames " << cert.log_start << ".." << cert.log_start + cert.frames.size() - 1 << ")";
@@ -185,6 +212,39 @@ Certificate read_header(Ref root, const Input& in, const std::string& input_sha2
   } catch (const FieldError& e) {
     throw Rejected(e.pointer, "", e.message);
   }
+}
+
+void apply_margin(const Certificate& cert, Input& in, std::ostream& out, Tally& tally) {
+  if (!cert.has_margin) return;
+  const Rat& m = cert.margin;
+  const bool shrink = cert.claim == "no-evasion";  // read_margin allows sheet, chambers (no-evasion) and route (evasion)
+  // Every radius first (in byte order of the ids), then the fence links.
+  for (std::uint32_t v = 0; v < in.vertex_count(); ++v) {
+    Rat& r = in.sensors[v].radius;
+    Rat adjusted = shrink ? Rat(r - m) : Rat(r + m);
+    if (adjusted <= 0)
+      throw Rejected("/margin", "sensor \"" + in.names[v] + "\"",
+                     "its radius " + to_text(r) + " minus the margin " + to_text(m) + " is " + to_text(adjusted) +
+                         ", not > 0 (§4.1.1)");
+    if (m != 0) ++tally.radii_adjusted;
+    r = std::move(adjusted);
+  }
+  if (shrink) {
+    const std::size_t n = in.fence.size();
+    const std::int64_t gap = first_fence_gap(in);
+    if (gap >= 0) {
+      const std::size_t i = static_cast<std::size_t>(gap);
+      const Sensor &a = in.sensors[in.fence[i]], &b = in.sensors[in.fence[(i + 1) % n]];
+      const Rat reach = a.radius + b.radius;
+      throw Rejected("/margin", "fence pair \"" + in.names[in.fence[i]] + "\", \"" + in.names[in.fence[(i + 1) % n]] + "\"",
+                     "with radii shrunk by the margin " + to_text(m) + " the two fence disks no longer meet: |c_i - c_j|^2 = " +
+                         to_text(dist2(a.points[0], b.points[0])) + " > (r_i + r_j)^2 = " + to_text(reach * reach) +
+                         " (§2.1 rule, §4.1.1)");
+    }
+    tally.fence_links_rechecked = n;
+  }
+  out << "margin: " << to_text(m) << ", every radius " << (shrink ? "shrunk to r - " : "grown to r + ") << to_text(m)
+      << (shrink ? "; all stay > 0 and consecutive fence disks still meet" : "") << " (§4.1.1)\n";
 }
 
 }  // namespace sweepcheck

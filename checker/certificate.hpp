@@ -11,6 +11,7 @@
 #include "fields.hpp"
 #include "input.hpp"
 #include "stack.hpp"
+#include "tally.hpp"
 
 namespace sweepcheck {
 
@@ -58,12 +59,21 @@ struct Certificate {
   Ring ring = Ring::Z;
   std::vector<Rat> frames;
   std::size_t log_start = 0;  // contact log: certificate frame k is log frame log_start + k
+  bool has_margin = false;    // §4.1.1: the key `margin` is present
+  Rat margin;                 // M >= 0 (0 when absent)
 };
 
-// §4.1 and §4.2 in this order: format, claim and method, the key set of that method,
-// input_sha256, input_format, ring, frames, notes (no duplicated keys inside), frames against
-// the input. Prints one finding line.
-Certificate read_header(json::Ref root, const Input& in, const std::string& input_sha256, std::ostream& out);
+// §4.1, §4.1.1 and §4.2 in this order: format, claim and method, the key set of that method,
+// input_sha256, input_format, margin, ring, frames, notes (no duplicated keys inside), frames
+// against the input. Prints one finding line.
+Certificate read_header(json::Ref root, const Input& in, const std::string& input_sha256, std::ostream& out,
+                        Tally& tally);
+
+// §4.1.1: the one place where the certificate's margin changes the input model. For claim
+// no-evasion every radius becomes r - M, which must stay > 0, and consecutive fence disks must
+// still meet; for claim evasion every radius becomes r + M. Every later check reads the adjusted
+// radii. No-op without a margin. Prints one finding line when there is a margin.
+void apply_margin(const Certificate& cert, Input& in, std::ostream& out, Tally& tally);
 
 // A frame index: a non-negative JSON integer below `limit`.
 std::uint32_t read_index(json::Ref v, const Where& where, std::size_t limit, const char* what);
@@ -74,8 +84,8 @@ void expect_row(json::Ref v, const Where& where, std::size_t length, const char*
 
 // The method checks (check_sheet.cpp, check_cocycle.cpp). They print findings and return a
 // summary for the ACCEPTED line, or throw Rejected at the first failing item.
-std::string check_sheet(const Certificate& cert, Stack& stack, std::ostream& out);
-std::string check_cocycle(const Certificate& cert, Stack& stack, std::ostream& out);
+std::string check_sheet(const Certificate& cert, Stack& stack, std::ostream& out, Tally& tally);
+std::string check_cocycle(const Certificate& cert, Stack& stack, std::ostream& out, Tally& tally);
 
 std::string ring_name(Ring r);
 

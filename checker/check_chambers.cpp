@@ -19,6 +19,7 @@
 #include "polygon.hpp"
 #include "positional.hpp"
 #include "quadtree.hpp"
+#include "tally.hpp"
 
 namespace sweepcheck {
 
@@ -127,8 +128,9 @@ struct BoxKeyHash {
 
 class ChamberCheck {
  public:
-  ChamberCheck(const Input& in, const Frame& frame, const FencePolygon& polygon, std::vector<std::uint32_t> table)
-      : in_(in), f_(frame), polygon_(polygon), boxes_(polygon, frame.origin, frame.side), table_(std::move(table)),
+  ChamberCheck(const Input& in, const Frame& frame, const FencePolygon& polygon, std::vector<std::uint32_t> table,
+               Tally& tally)
+      : tally_(tally), in_(in), f_(frame), polygon_(polygon), boxes_(polygon, frame.origin, frame.side), table_(std::move(table)),
         disks_(table_.size()), made_(table_.size(), false), end_(table_.size()), end_slab_(table_.size(), -1) {
     for (std::uint32_t v : table_) {
       const Rat ru = in_.sensors[v].radius * f_.unit;
@@ -148,18 +150,16 @@ class ChamberCheck {
     for (std::size_t i = 0; i < nodes.size(); ++i) {
       const Quadtree::Node& n = nodes[i];
       if (n.token >= 0) {
-        ++covered_;
         check_covered(n, i, slab, j);
+        ++tally_.covered;
       } else if (n.token == Quadtree::kOutside) {
-        ++outside_;
         check_outside(n, i, slab, j);
+        ++tally_.outside;
       } else if (n.token == Quadtree::kOpen) {
-        ++open_;
+        ++tally_.open;
       }
     }
   }
-
-  std::size_t covered_ = 0, outside_ = 0, open_ = 0, outside_tests_ = 0;
 
  private:
   std::string where(std::size_t j, std::size_t i) const {
@@ -210,13 +210,15 @@ class ChamberCheck {
           throw Rejected(where(j, i), item(n, slab),
                          "corner " + point_text(f_.corner(us[c], vs[c])) + " is outside the disk of " + sensor_text(in_, v) +
                              " at t=" + to_text(d.t) + " (rule 4.5.1)");
+        else
+          ++tally_.corner_tests;
   }
 
   void check_outside(const Quadtree::Node& n, std::size_t i, const Slab& slab, std::size_t j) {
     const BoxKey key{static_cast<std::uint64_t>(n.x) | (static_cast<std::uint64_t>(n.depth) << 42),
                      static_cast<std::uint64_t>(n.y)};
     if (outside_ok_.count(key)) return;
-    ++outside_tests_;
+    ++tally_.outside_boxes;
     const std::int64_t hit = boxes_.meets_interior(n.x, n.y, n.side());
     if (hit < 0) {
       outside_ok_.insert(key);
@@ -236,6 +238,7 @@ class ChamberCheck {
                        point_text(f_.corner(n.x + h, n.y + h)) + " lies inside the fence polygon (rule 4.5.2)");
   }
 
+  Tally& tally_;
   const Input& in_;
   const Frame& f_;
   const FencePolygon& polygon_;
@@ -292,7 +295,7 @@ std::vector<std::uint32_t> live_set(const Quadtree& cur, const Quadtree* prev, c
 
 }  // namespace
 
-std::string check_chambers(const Certificate& cert, const Input& in, std::ostream& out) {
+std::string check_chambers(const Certificate& cert, const Input& in, std::ostream& out, Tally& tally) {
   try {
     const Members& m = cert.members;
     // The square Q, which must hold every fence centre.
@@ -313,6 +316,7 @@ std::string check_chambers(const Certificate& cert, const Input& in, std::ostrea
       if (c.x < f.origin.x || c.x > far.x || c.y < f.origin.y || c.y > far.y)
         throw Rejected("/square", "fence " + sensor_text(in, polygon.ids[i]) + " at " + point_text(c),
                        "the fence centre lies outside the square " + q_text + " (§4.5)");
+      ++tally.fence_in_square;
     }
 
     // The sensor table.
@@ -330,6 +334,7 @@ std::string check_chambers(const Certificate& cert, const Input& in, std::ostrea
                        "listed twice in the sensor table (also at /sensors/" + std::to_string(first[v]) + ", §4.5)");
       first[v] = static_cast<std::int64_t>(k);
       table_v.push_back(static_cast<std::uint32_t>(v));
+      ++tally.table;
     }
     if (table_v.size() > 0x7FFFFFF0u) throw Rejected("/sensors", "", "too many entries");
 
@@ -354,30 +359,35 @@ std::string check_chambers(const Certificate& cert, const Input& in, std::ostrea
         throw Rejected(p + "/t/0", "t=" + to_text(slab.a),
                        "a slab must start where the previous one ends, at t=" + to_text(slabs.back().b) + " (§4.5)");
       slabs.push_back(std::move(slab));
+      ++tally.slabs;
     }
     if (slabs.back().b > in.horizon_end)
       throw Rejected(at("/slabs", slabs.size() - 1) + "/t/1", "t=" + to_text(slabs.back().b),
                      "the last slab ends after the horizon end " + to_text(in.horizon_end) + " (§4.5)");
+    tally.slab_times = true;
     out << "chambers: square " << q_text << " holds the fence; " << table_v.size() << " sensors in the table; "
         << slabs.size() << " slabs, t=" << to_text(slabs.front().a) << ".." << to_text(slabs.back().b) << "\n";
 
     // Slab by slab: the tree, rules 1 and 2, the live set.
-    ChamberCheck check(in, f, polygon, table_v);
+    ChamberCheck check(in, f, polygon, table_v, tally);
     std::unique_ptr<Quadtree> prev;
     std::vector<std::uint32_t> live, stack;
-    std::size_t cells = 0, empty_from = slabs.size(), peak = 0;
+    std::size_t empty_from = slabs.size(), peak = 0;
     for (std::size_t j = 0; j < slabs.size(); ++j) {
       auto cur = std::make_unique<Quadtree>(slabs[j].tree, at("/slabs", j) + "/tree", table_v.size());
-      cells += cur->nodes().size() - (cur->nodes().size() - 1) / 4;  // leaves of a full 4-ary tree
       check.check_cells(*cur, slabs[j], j);
       live = live_set(*cur, prev.get(), live, stack);
       peak = std::max(peak, live.size());
+      tally.cells += cur->nodes().size() - (cur->nodes().size() - 1) / 4;  // leaves of a full 4-ary tree
+      tally.live_cells += live.size();
+      tally.live_peak = peak;
+      ++tally.slabs_done;
       if (live.empty() && empty_from == slabs.size()) empty_from = j;
       prev = std::move(cur);
     }
-    out << "chambers: " << cells << " cells (" << check.covered_ << " covered, " << check.outside_ << " outside, "
-        << check.open_ << " open); covered cells stay covered through their slabs (rule 4.5.1); outside cells miss "
-        << "the interior of P (rule 4.5.2, " << check.outside_tests_ << " distinct boxes tested)\n";
+    out << "chambers: " << tally.cells << " cells (" << tally.covered << " covered, " << tally.outside << " outside, "
+        << tally.open << " open); covered cells stay covered through their slabs (rule 4.5.1); outside cells miss "
+        << "the interior of P (rule 4.5.2, " << tally.outside_boxes << " distinct boxes tested)\n";
     if (!live.empty()) {
       const std::size_t j = slabs.size() - 1;
       const std::uint32_t first_live = *std::min_element(live.begin(), live.end());
@@ -386,6 +396,8 @@ std::string check_chambers(const Certificate& cert, const Input& in, std::ostrea
                          at("/slabs", j) + "/tree/" + std::to_string(first_live) + " " +
                          cell_text(prev->nodes()[first_live], f) + ") (rule 4.5.4)");
     }
+    tally.live_empty = true;
+    tally.empty_from = empty_from;
     const Slab& e = slabs[empty_from];
     out << "chambers: the live set is empty from slab " << empty_from << " (t=[" << to_text(e.a) << ", "
         << to_text(e.b) << "]) on; at most " << peak << " live cells in a slab (rule 4.5.4)\n";

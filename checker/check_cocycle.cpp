@@ -84,7 +84,7 @@ V boundary_value(const TwoCell& cell, Stack& stack, Phi<V>& phi) {
 // order in which cells are found.
 template <class V>
 std::string evaluate(const Cochain& c, const Values& values, Stack& stack, Ring ring, const Int& fence_value,
-                     std::ostream& out) {
+                     std::ostream& out, Tally& tally) {
   // The listed cells, frame by frame: the adjacency of a log frame is built once.
   std::vector<std::pair<std::uint32_t, std::uint64_t>> listed;  // (frame or slab, row number)
   listed.reserve(c.edge_rows.size() + c.vertical_rows.size());
@@ -121,6 +121,9 @@ std::string evaluate(const Cochain& c, const Values& values, Stack& stack, Ring 
                    "phi(boundary) = " + d.str() + (ring == Ring::Z2 ? " (odd)" : "") +
                        ", but a cocycle must vanish on every 2-cell (rule 4.4.2; the row named is one on its boundary)");
   }
+  tally.cocycle_triangles = triangles;
+  tally.cocycle_prisms = prisms;
+  tally.coboundary_zero = true;
   out << "coboundary: phi vanishes on the " << triangles << " triangles and " << prisms
       << " prisms incident to its support, enumerated from INPUT (once per listed face); the other 2-cells have no "
          "face where phi is nonzero (rule 2)\n";
@@ -135,6 +138,7 @@ std::string evaluate(const Cochain& c, const Values& values, Stack& stack, Ring 
     throw Rejected("/fence_value", "fence loop L_0 at " + stack.frame_text(0),
                    "phi(L_0) = " + loop.str() + " but fence_value is " + fence_value.str() +
                        (ring == Ring::Z2 ? " (mod 2)" : "") + " (rule 4.4.3)");
+  tally.fence_loop = true;
   out << "fence loop: phi(L_0) = " << fence_value << (ring == Ring::Z2 ? " (mod 2)" : "") << " != 0 (rule 3)\n";
   return "no sheet exists over " + ring_name(ring) + " on these " + std::to_string(stack.frame_count()) +
          " frames (t=" + to_text(stack.time(0)) + ".." + to_text(stack.time(stack.frame_count() - 1)) + ")";
@@ -142,7 +146,7 @@ std::string evaluate(const Cochain& c, const Values& values, Stack& stack, Ring 
 
 }  // namespace
 
-std::string check_cocycle(const Certificate& cert, Stack& stack, std::ostream& out) {
+std::string check_cocycle(const Certificate& cert, Stack& stack, std::ostream& out, Tally& tally) {
   const Input& in = stack.input();
   const Members& m = cert.members;
   const Ring ring = cert.ring;
@@ -174,6 +178,7 @@ std::string check_cocycle(const Certificate& cert, Stack& stack, std::ostream& o
     e.key = pack(stack.pair_id(v[0], v[1]), k);
     auto [first, fresh] = c.edges.insert(e.key, static_cast<std::uint32_t>(i));
     if (!fresh) throw Rejected(w.str(), item(), "the cell appears twice (also /edges/" + std::to_string(*first) + ", rule 4.4.1)");
+    ++tally.edge_values;
     c.edge_rows.push_back(e);
   }
   Ref verticals = m.need("verticals");
@@ -189,6 +194,7 @@ std::string check_cocycle(const Certificate& cert, Stack& stack, std::ostream& o
     if (!fresh)
       throw Rejected(w.str(), "vertical V(" + stack.name(v) + ") over " + stack.slab_text(k),
                      "the cell appears twice (also /verticals/" + std::to_string(*first) + ", rule 4.4.1)");
+    ++tally.vertical_values;
     c.vertical_rows.push_back(e);
   }
   out << "cochain: " << edges.size() << " edge values and " << verticals.size()
@@ -196,7 +202,7 @@ std::string check_cocycle(const Certificate& cert, Stack& stack, std::ostream& o
 
   return fast_then_exact(!values.any_big(), out, [&](auto use, std::ostream& sink) {
     using T = typename decltype(use)::type;
-    return evaluate<T>(c, values, stack, ring, fence_value, sink);
+    return evaluate<T>(c, values, stack, ring, fence_value, sink, tally);
   });
 }
 

@@ -88,7 +88,7 @@ struct Route {
 // Rule 2 for one sensor: the first failing piece, if any. Pieces whose route leg and sensor
 // segment lie in integer boxes farther apart than r are passed without rational arithmetic;
 // the others get the exact test of §4.6.
-Failure first_failure(const Input& in, std::uint32_t v, const Route& route) {
+Failure first_failure(const Input& in, std::uint32_t v, const Route& route, Tally& tally) {
   const Sensor& s = in.sensors[v];
   const Rat r2 = s.radius * s.radius;
   std::int64_t rs = 0;
@@ -119,6 +119,7 @@ Failure first_failure(const Input& in, std::uint32_t v, const Route& route) {
     const bool waypoint = k < ts.size() && ts[k] < route.t[leg];
     const Rat& t1 = waypoint ? ts[k] : route.t[leg];
     if (!apart(route.legs[leg], box, R2)) {
+      ++tally.pieces_exact;
       Failure f{true, t0, t1, v, ""};
       if (!have0) {
         exact(t0, d0, e0);
@@ -152,6 +153,7 @@ Failure first_failure(const Input& in, std::uint32_t v, const Route& route) {
       e0 = std::move(e1);
       have0 = true;
     } else {
+      ++tally.pieces_filtered;
       have0 = false;
     }
     t0 = t1;
@@ -171,7 +173,7 @@ Failure first_failure(const Input& in, std::uint32_t v, const Route& route) {
 
 }  // namespace
 
-std::string check_route(const Certificate& cert, const Input& in, std::ostream& out) {
+std::string check_route(const Certificate& cert, const Input& in, std::ostream& out, Tally& tally) {
   try {
     Ref route = cert.members.need("route");
     expect_array(route, "/route", 2);
@@ -187,6 +189,7 @@ std::string check_route(const Certificate& cert, const Input& in, std::ostream& 
                                                         " (§4.6)");
       rt.push_back(std::move(t));
       rp.push_back(Point{get_rational(route[r][1], p + "/1"), get_rational(route[r][2], p + "/2")});
+      ++tally.route_rows;
     }
     if (rt.front() != in.horizon_start)
       throw Rejected("/route/0/0", "t=" + to_text(rt.front()),
@@ -208,6 +211,7 @@ std::string check_route(const Certificate& cert, const Input& in, std::ostream& 
                                ", not strictly inside P (rule 4.6.1)"
                          : std::string("the first point lies outside the fence polygon, not strictly inside P (rule 4.6.1)"));
     }
+    tally.route_starts_inside = true;
     out << "route: " << rt.size() << " rows over the horizon [" << to_text(rt.front()) << ", " << to_text(rt.back())
         << "], starting strictly inside P (rule 4.6.1)\n";
 
@@ -216,8 +220,9 @@ std::string check_route(const Certificate& cert, const Input& in, std::ostream& 
     for (std::size_t r = 1; r < rt.size(); ++r) rt_.legs[r] = int_box(rp[r - 1], rp[r]);
     Failure first;
     for (std::uint32_t v = 0; v < in.vertex_count(); ++v) {
-      Failure f = first_failure(in, v, rt_);
+      Failure f = first_failure(in, v, rt_, tally);
       if (f.found && (!first.found || f.t0 < first.t0)) first = std::move(f);
+      if (!f.found) ++tally.route_sensors;
     }
     if (first.found) {
       const std::size_t row = static_cast<std::size_t>(std::lower_bound(rt.begin(), rt.end(), first.t1) - rt.begin());
@@ -225,6 +230,7 @@ std::string check_route(const Certificate& cert, const Input& in, std::ostream& 
                      "the route comes within the disk of " + sensor_text(in, first.sensor) + " " + first.detail +
                          " (rule 4.6.2)");
     }
+    tally.route_clear = true;
     out << "route: stays strictly outside every sensor's disk (" << in.vertex_count()
         << " sensors, fence included) on every piece (rule 4.6.2)\n";
     return "an evasion path exists: the route starts strictly inside P and avoids every disk on [" +

@@ -60,7 +60,10 @@ bool nonzero(const V& x, Ring ring) { return ring == Ring::Z ? x != 0 : (x % 2) 
 // frame are much faster than one map of every cell of a large sheet.
 template <class V>
 std::string boundary_and_winding(const std::vector<Row>& rows, const Values& values, Stack& stack, Ring ring,
-                                 const Int& winding, std::ostream& out) {
+                                 const Int& winding, std::ostream& out, Tally& tally) {
+  // Set afresh: the exact path may redo this after the fast one overflowed.
+  tally.faces_summed = tally.boundary_cells = tally.cylinder_cells = tally.fence_edges_wound = 0;
+  tally.on_cylinder = false;
   const std::size_t frames = stack.frame_count();
   // The rows by frame, a counting sort: the rows at frame k are by_frame[begin[k], begin[k + 1]).
   std::vector<std::size_t> begin(frames + 2, 0);
@@ -83,10 +86,12 @@ std::string boundary_and_winding(const std::vector<Row>& rows, const Values& val
       for_each_face(r, stack, [&](bool vertical, std::uint64_t key, int s) {
         if (static_cast<std::uint32_t>(key) != k) return;
         const V term = s < 0 ? V(-c) : c;
+        ++tally.faces_summed;
         auto [slot, fresh] = (vertical ? verticals : edges).insert(key >> 32, term);
         if (!fresh) *slot += term;
       });
     }
+    tally.boundary_cells += edges.size() + verticals.size();
     // Rule 3 (nothing outside the fence cylinder: fence edges, fence verticals), and rule 4's
     // sums: the winding along every fence edge, in listed orientation.
     edges.for_each([&](std::uint64_t pair, const V& x) {
@@ -123,6 +128,8 @@ std::string boundary_and_winding(const std::vector<Row>& rows, const Values& val
                            " such cells, rule 4.3.3)");
     }
   }
+  tally.cylinder_cells = on_cylinder;
+  tally.on_cylinder = true;
   out << "boundary: " << on_cylinder << " nonzero cells, all on the fence cylinder (rule 3)\n";
   // Rule 4.
   const auto& fence = stack.input().fence;
@@ -133,6 +140,7 @@ std::string boundary_and_winding(const std::vector<Row>& rows, const Values& val
                      "fence edge [" + stack.name(fence[i]) + "," + stack.name(fence[(i + 1) % fence.size()]) + "]",
                      "the boundary winds " + wind[i].str() + " times along this fence edge, not " + winding.str() +
                          (ring == Ring::Z2 ? " (mod 2)" : "") + " (rule 4.3.4)");
+    ++tally.fence_edges_wound;
   }
   out << "winding: " << winding << (ring == Ring::Z2 ? " (mod 2)" : "") << " along each of the " << wind.size()
       << " fence edges (rule 4)\n";
@@ -146,7 +154,7 @@ std::string boundary_and_winding(const std::vector<Row>& rows, const Values& val
 
 }  // namespace
 
-std::string check_sheet(const Certificate& cert, Stack& stack, std::ostream& out) {
+std::string check_sheet(const Certificate& cert, Stack& stack, std::ostream& out, Tally& tally) {
   const Input& in = stack.input();
   const Members& m = cert.members;
   const Ring ring = cert.ring;
@@ -205,6 +213,7 @@ std::string check_sheet(const Certificate& cert, Stack& stack, std::ostream& out
           throw Rejected(w.at(5).str(), item(), "witness (" + to_text(p.x) + ", " + to_text(p.y) +
                                                     ") lies outside the disk of sensor \"" + stack.name(given[j]) +
                                                     "\" (rule 4.3.1)");
+      ++tally.witnesses;
     } else if (!stack.triangle_present(r.v[0], r.v[1], r.v[2], r.k)) {
       throw Rejected(w.str(), item(), in.listed ? "not a listed triple of the log at this frame (rule 4.3.1)"
                                                 : "the three sensors are not pairwise in contact at this frame (rule 4.3.1)");
@@ -213,6 +222,7 @@ std::string check_sheet(const Certificate& cert, Stack& stack, std::ostream& out
                                                  static_cast<std::uint32_t>(triple_ids.size())).first;
     auto [first, fresh] = seen.insert(pack(tid, r.k), static_cast<std::uint32_t>(i));
     if (!fresh) throw Rejected(w.str(), item(), "the cell appears twice (also /triangles/" + std::to_string(*first) + ", rule 4.3.2)");
+    ++tally.triangles;
     rows.push_back(r);
   }
 
@@ -231,16 +241,20 @@ std::string check_sheet(const Certificate& cert, Stack& stack, std::ostream& out
     for (std::uint32_t end : {r.k, r.k + 1})
       if (!stack.edge_present(r.v[0], r.v[1], end))
         throw Rejected(w.str(), item(), "the edge is not present at " + stack.frame_text(end) + " (rule 4.3.1)");
+      else
+        ++tally.prism_end_tests;
     auto [first, fresh] = seen_prisms.insert(pack(stack.pair_id(r.v[0], r.v[1]), r.k), static_cast<std::uint32_t>(i));
     if (!fresh) throw Rejected(w.str(), item(), "the cell appears twice (also /prisms/" + std::to_string(*first) + ", rule 4.3.2)");
+    ++tally.prisms;
     rows.push_back(r);
   }
   out << "sheet: " << triangles.size() << " triangles and " << prisms.size()
       << " prisms, every cell present, none twice, no zero coefficient (rules 1, 2)\n";
+  tally.cells_distinct = true;
 
   return fast_then_exact(!values.any_big(), out, [&](auto use, std::ostream& sink) {
     using T = typename decltype(use)::type;
-    return boundary_and_winding<T>(rows, values, stack, ring, winding, sink);
+    return boundary_and_winding<T>(rows, values, stack, ring, winding, sink, tally);
   });
 }
 

@@ -43,12 +43,11 @@ void check_fence_polygon(const Input& in) {
   const std::size_t m = in.fence.size();
   auto centre = [&](std::size_t i) -> const Point& { return in.sensors[in.fence[i % m]].points[0]; };
   auto name = [&](std::size_t i) { return id_text(in.names[in.fence[i % m]]); };
-  for (std::size_t i = 0; i < m; ++i) {
-    const Sensor& a = in.sensors[in.fence[i]];
-    const Sensor& b = in.sensors[in.fence[(i + 1) % m]];
-    if (!disks_meet(a.points[0], a.radius, b.points[0], b.radius))
-      invalid(at("/fence", (i + 1) % m), "fence gap: the disks of " + name(i) + " and " + name(i + 1) +
-                                             " do not meet (|c_i - c_j|^2 > (r_i + r_j)^2, §2.1)");
+  const std::int64_t gap = first_fence_gap(in);
+  if (gap >= 0) {
+    const std::size_t i = static_cast<std::size_t>(gap);
+    invalid(at("/fence", (i + 1) % m), "fence gap: the disks of " + name(i) + " and " + name(i + 1) +
+                                           " do not meet (|c_i - c_j|^2 > (r_i + r_j)^2, §2.1)");
   }
   for (std::size_t i = 0; i < m; ++i)
     for (std::size_t j = i + 1; j < m; ++j)
@@ -91,7 +90,7 @@ void invert(const std::vector<std::uint32_t>& by_frame, const std::vector<std::s
 
 void load_scenario(const Members& root, Input& in) {
   in.kind = InputKind::Scenario;
-  if (auto title = root.get("title")) get_string(*title, root.at("title"));
+  if (auto title = root.get("title")) in.title = std::string(get_string(*title, root.at("title")));
   Ref horizon = root.need("horizon");
   expect_array(horizon, "/horizon", 2, 2);
   in.horizon_start = get_rational(horizon[0], "/horizon/0");
@@ -156,7 +155,7 @@ void load_scenario(const Members& root, Input& in) {
 
 void load_contact_log(const Members& root, Input& in) {
   in.kind = InputKind::ContactLog;
-  if (auto title = root.get("title")) get_string(*title, root.at("title"));
+  if (auto title = root.get("title")) in.title = std::string(get_string(*title, root.at("title")));
 
   // Every id, numbered in order of first appearance: the fence, `sensors`, then the frames.
   StringIndex ids;
@@ -300,6 +299,16 @@ void load_contact_log(const Members& root, Input& in) {
 }
 
 }  // namespace
+
+std::int64_t first_fence_gap(const Input& in) {
+  const std::size_t m = in.fence.size();
+  for (std::size_t i = 0; i < m; ++i) {
+    const Sensor& a = in.sensors[in.fence[i]];
+    const Sensor& b = in.sensors[in.fence[(i + 1) % m]];
+    if (!disks_meet(a.points[0], a.radius, b.points[0], b.radius)) return static_cast<std::int64_t>(i);
+  }
+  return -1;
+}
 
 std::unique_ptr<Input> load_input(const json::Document& doc) {
   auto in = std::make_unique<Input>();

@@ -28,6 +28,7 @@ struct Sensor {
 struct Input {
   InputKind kind = InputKind::Scenario;
   std::string format;  // the input's `format` string
+  std::string title;   // the optional `title` ("" when absent)
 
   // Vertices. A vertex's index is the rank of its id in byte-wise order (§1.3), so comparing
   // indices compares ids, and the canonical orientation (§3.2) is increasing index order.
@@ -90,6 +91,12 @@ struct Input {
     return it != last && *it == f ? slots[static_cast<std::size_t>(it - frames.begin())] : kAbsent;
   }
 };
+
+// Positional scenario: the first i (in listed order) whose fence disk and that of fence sensor
+// i + 1 (cyclically) share no point, |c_i - c_{i+1}|^2 > (r_i + r_{i+1})^2; or -1 when every two
+// consecutive fence disks meet (the rule of §2.1, also applied to the radii adjusted by a
+// certificate's margin, §4.1.1).
+std::int64_t first_fence_gap(const Input& in);
 
 // Validates `doc` as a scenario or contact log. Throws Unreadable("INPUT <pointer>: ...").
 std::unique_ptr<Input> load_input(const json::Document& doc);

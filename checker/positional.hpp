@@ -22,7 +22,7 @@ std::string sensor_text(const Input& in, std::uint32_t v);
 // The method checks (check_chambers.cpp, check_route.cpp). Positional input only. They print
 // findings and return a summary for the ACCEPTED line, or throw Rejected at the first failing
 // item.
-std::string check_chambers(const Certificate& cert, const Input& in, std::ostream& out);
-std::string check_route(const Certificate& cert, const Input& in, std::ostream& out);
+std::string check_chambers(const Certificate& cert, const Input& in, std::ostream& out, Tally& tally);
+std::string check_route(const Certificate& cert, const Input& in, std::ostream& out, Tally& tally);
 
 }  // namespace sweepcheck
