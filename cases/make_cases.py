@@ -91,3 +91,20 @@ write("border-corridor.json", "Border corridor, two drones flying staggered (inv
 # Expected: evasion.
 write("border-corridor-late.json", "Border corridor, second drone six seconds late (invented)",
       ["0", "46"], rectangle_fence(40, 8, 2, "3/2"), [drone("D1", "2", 0), drone("D2", "6", 6)])
+
+
+# The depot yard again as the CSV tables a fleet tool might export (rows of a sensor in any
+# order), for `sweepcert import`; the imported scenario equals depot-yard-night.json.
+def write_csv(name, header, rows):
+    os.makedirs(os.path.join(HERE, "csv"), exist_ok=True)
+    with open(os.path.join(HERE, "csv", name), "w", newline="") as f:
+        f.write(",".join(header) + "\n")
+        for row in rows:
+            f.write(",".join(row) + "\n")
+
+
+write_csv("depot-yard-night.tracks.csv", ["sensor", "t", "x", "y", "radius"],
+          [[s["id"], t, x, y, s["radius"]] for s in guards for (t, x, y) in reversed(s["track"])]
+          + [["L1", "0", "22", "6", "2"]])
+write_csv("depot-yard-night.fence.csv", ["sensor", "x", "y", "radius"],
+          [[f["id"], f["at"][0], f["at"][1], f["radius"]] for f in rectangle_fence(24, 12, 2, "3/2")])

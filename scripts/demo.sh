@@ -1,5 +1,5 @@
 #!/usr/bin/env bash
-# Install, build, then prove a bundled sweep and re-check the certificate independently.
+# Install, build, then prove a bundled sweep, re-check the certificate independently, and draw it.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 bash scripts/install-deps.sh
@@ -7,8 +7,13 @@ bash scripts/build.sh release sweepcert sweepcheck
 bin=build/release
 mkdir -p build/demo
 echo
-echo "== sweepcert prove cases/column-sweep.json (a robot column crossing a 20 x 10 hall)"
-"$bin/prover/sweepcert" prove cases/column-sweep.json -o build/demo/column-sweep.cert.json
+echo "== sweepcert prove cases/depot-yard-night.json (four guards walk abreast across a 24 x 12 depot yard)"
+"$bin/prover/sweepcert" prove cases/depot-yard-night.json -o build/demo/depot-yard-night.cert.json
 echo
-echo "== sweepcheck cases/column-sweep.json build/demo/column-sweep.cert.json"
-"$bin/checker/sweepcheck" cases/column-sweep.json build/demo/column-sweep.cert.json
+echo "== sweepcheck --explain cases/depot-yard-night.json build/demo/depot-yard-night.cert.json"
+"$bin/checker/sweepcheck" --explain cases/depot-yard-night.json build/demo/depot-yard-night.cert.json
+echo
+echo "== sweepcert report cases/depot-yard-night.json build/demo/depot-yard-night.cert.json"
+"$bin/prover/sweepcert" report cases/depot-yard-night.json build/demo/depot-yard-night.cert.json \
+  -o build/demo/depot-yard-night.html
+echo "Open build/demo/depot-yard-night.html in a browser to watch the sweep."
