@@ -107,7 +107,8 @@ void assumptions(const Account& a, std::ostream& out) {
            "  - the fence ids, in the listed cyclic order, are in contact at every frame and enclose the guarded area;\n";
   }
   out << "  - an intruder is a point that moves continuously, at any speed.\n"
-         "  Not covered: sensor faults or blind spots, occlusion, wrong positions, tracks or logs, tampering.\n"
+         "  Not covered: sensor faults or blind spots, occlusion, wrong positions (beyond the margin,\n"
+         "  if any), wrong tracks or logs, tampering.\n"
          "  The certificate proves a statement about this model; whether the model matches the site is a matter\n"
          "  for site-specific security practice.\n";
 }
