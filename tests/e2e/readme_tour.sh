@@ -24,7 +24,7 @@ expect tour/yard.log.cert.json no-evasion
 expect tour/hall.pairs.cert.json no-evasion
 expect tour/yard-from-csv.cert.json no-evasion
 grep -q '"margin": "1/4"' tour/yard.m.cert.json || { echo "FAIL: margin not recorded"; exit 1; }
-[[ $(grep -c '^ACCEPTED' tour.out) -eq 6 ]] || { cat tour.out; echo "FAIL: expected 6 ACCEPTED lines"; exit 1; }
+[[ $(grep -c '^ACCEPTED' tour.out) -eq 7 ]] || { cat tour.out; echo "FAIL: expected 7 ACCEPTED lines (one per sweepcheck run)"; exit 1; }
 for f in tour/yard.html tour/aisle.html tour/pocket.html tour/aisle-15.svg; do
   [[ -s $f ]] || { echo "FAIL: $f missing"; exit 1; }
 done
