@@ -13,20 +13,21 @@
 
 namespace sweepcheck {
 
-int check_texts(std::string input_bytes, std::string cert_bytes, std::ostream& out, std::ostream& err) {
+int check_texts(std::string input_bytes, std::string cert_bytes, std::ostream& out, std::ostream& err,
+                const std::string& input_name, const std::string& cert_name) {
   try {
     // Everything that makes a file unreadable (exit 2) is found before any certificate rule:
     // the input's errors first. The certificate is parsed on a second thread meanwhile (or
     // later on this one, if no thread can be made); the input's DOM is dropped once validated.
     const std::string hash = sha256_hex(input_bytes);
-    auto cert_parse = std::async(std::launch::async | std::launch::deferred, [&cert_bytes] {
-      json::Document doc = json::parse(cert_bytes, "CERT");
+    auto cert_parse = std::async(std::launch::async | std::launch::deferred, [&cert_bytes, &cert_name] {
+      json::Document doc = json::parse(cert_bytes, cert_name);
       std::string().swap(cert_bytes);
       return doc;
     });
     std::unique_ptr<Input> in;
     {
-      const json::Document input_doc = json::parse(input_bytes, "INPUT");
+      const json::Document input_doc = json::parse(input_bytes, input_name);
       std::string().swap(input_bytes);
       in = load_input(input_doc);
     }
@@ -81,7 +82,8 @@ int check_files(const std::string& input_path, const std::string& cert_path, std
     err << "sweepcheck: out of memory reading the files\n";
     return 2;
   }
-  return check_texts(std::move(input_bytes), std::move(cert_bytes), out, err);
+  return check_texts(std::move(input_bytes), std::move(cert_bytes), out, err, "INPUT " + input_path,
+                     "CERT " + cert_path);
 }
 
 }  // namespace sweepcheck
