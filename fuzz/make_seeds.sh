@@ -6,7 +6,9 @@
 #                 (auto, forced methods, both rings; scenario and log inputs)
 #   json/         every file above, alone
 # plus the small hand-written seeds of fuzz/seeds/<target>/. Seeds over MAX_BYTES (default
-# 65536, the fuzzers' -max_len) are left out, and identical seeds are kept once.
+# 65536, the fuzzers' -max_len) are left out, and so are INPUT+CERT pairs over 24 KiB: under
+# the sanitizers they take seconds per run (the full pocket-wall cocycles over 10 s, the
+# fuzzers' hang limit). Identical seeds are kept once.
 # Usage: make_seeds.sh SWEEPCERT_BINARY OUT_DIR [MAX_BYTES]
 set -euo pipefail
 prover=$1 out=$2 max_bytes=${3:-65536}
@@ -54,6 +56,8 @@ done
 rm -rf "$out/work"
 skipped=$(find "$out" -type f -size +"$max_bytes"c | wc -l)
 find "$out" -type f -size +"$max_bytes"c -delete
+skipped=$((skipped + $(find "$out/certificate" -type f -size +24576c | wc -l)))
+find "$out/certificate" -type f -size +24576c -delete
 for target in scenario contacts certificate json; do
   # Keep the first of identical files.
   (cd "$out/$target" && md5sum -- * | sort | awk 'seen[$1]++ {print $2}' | xargs -r rm --)
