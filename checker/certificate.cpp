@@ -78,6 +78,23 @@ std::string one_of(const Members& m, std::string_view key, std::initializer_list
   return std::string(s);
 }
 
+// §1.5: the rows of every cell list and the tokens of every chamber tree, counted on array
+// sizes before any is read. Shapes are checked later, by the method; here a value of another
+// kind simply counts nothing.
+std::size_t certificate_items(const Members& m) {
+  std::size_t items = 0;
+  for (const char* key : {"triangles", "prisms", "edges", "verticals", "sensors", "route", "slabs"})
+    if (auto v = m.get(key); v && v->is(Kind::Array)) items += v->size();
+  if (auto slabs = m.get("slabs"); slabs && slabs->is(Kind::Array))
+    for (std::size_t j = 0; j < slabs->size(); ++j) {
+      Ref slab = (*slabs)[j];
+      if (!slab.is(Kind::Object)) continue;
+      for (std::size_t i = 0; i < slab.size(); ++i)
+        if (slab.key(i) == "tree" && slab.value(i).is(Kind::Array)) items += slab.value(i).size();
+    }
+  return items;
+}
+
 bool is_lower_hex(std::string_view s) {
   return s.size() == 64 && std::all_of(s.begin(), s.end(), [](char c) { return (c >= '0' && c <= '9') || (c >= 'a' && c <= 'f'); });
 }
@@ -142,6 +159,13 @@ Certificate read_header(Ref root, const Input& in, const std::string& input_sha2
                                         "square", "sensors", "slabs", "route", "margin"}),
                      "", "", Ring::Z, {}, 0, false, Rat(0)};
     const Members& m = cert.members;
+    // The §1.5 count limits make the file unreadable (exit 2), whatever else it says.
+    if (const std::size_t items = certificate_items(m); items > json::kMaxItems)
+      throw Unreadable("CERT (root): " + std::to_string(items) + " rows and tree tokens exceed the certificate item limit of " +
+                       std::to_string(json::kMaxItems) + " (§1.5)");
+    if (auto frames = m.get("frames"); frames && frames->is(Kind::Array) && frames->size() > json::kMaxFrames)
+      throw Unreadable("CERT /frames: " + std::to_string(frames->size()) + " frames exceed the frame limit of " +
+                       std::to_string(json::kMaxFrames) + " (§1.5)");
     one_of(m, "format", {"sweepcert-certificate-1"});
     cert.claim = one_of(m, "claim", {"no-evasion", "no-sheet", "evasion"});
     cert.method = one_of(m, "method", {"sheet", "cocycle", "chambers", "route"});
@@ -197,7 +221,6 @@ Certificate read_header(Ref root, const Input& in, const std::string& input_sha2
         throw Rejected(at("/frames", k), "t=" + to_text(t), "frames must increase strictly (§4.1)");
       cert.frames.push_back(std::move(t));
     }
-    if (frames.size() > 0xFFFFFFF0u) throw Rejected("/frames", "", "too many frames");
     if (auto notes = m.get("notes")) {
       std::string dup = json::find_duplicate_key(*notes, "/notes");
       if (!dup.empty()) throw Rejected(dup, "", "duplicated key (§1.4)");

@@ -24,14 +24,20 @@ int check_texts(std::string input_bytes, std::string cert_bytes, std::ostream& o
     // later on this one, if no thread can be made); the input's DOM is dropped once validated.
     const std::string hash = sha256_hex(input_bytes);
     const std::size_t input_size = input_bytes.size();
-    auto cert_parse = std::async(std::launch::async | std::launch::deferred, [&cert_bytes] {
-      json::Document doc = json::parse(cert_bytes, "CERT");
+    // Syntax errors name the file: "INPUT <path>" / "CERT <path>" (just the role for bare texts).
+    auto label = [](const char* role, const std::string& name) {
+      return name == role ? name : std::string(role) + " " + name;
+    };
+    const std::string input_label = label("INPUT", options.input_name);
+    const std::string cert_label = label("CERT", options.cert_name);
+    auto cert_parse = std::async(std::launch::async | std::launch::deferred, [&cert_bytes, &cert_label] {
+      json::Document doc = json::parse(cert_bytes, cert_label);
       std::string().swap(cert_bytes);
       return doc;
     });
     std::unique_ptr<Input> in;
     {
-      const json::Document input_doc = json::parse(input_bytes, "INPUT");
+      const json::Document input_doc = json::parse(input_bytes, input_label);
       std::string().swap(input_bytes);
       in = load_input(input_doc);
     }

@@ -18,6 +18,14 @@ using json::Ref;
 
 std::string id_text(std::string_view id) { return "\"" + std::string(id) + "\""; }
 
+// §1.5 count limits, checked on array sizes before any element is read.
+void within_limit(std::size_t count, std::size_t limit, const std::string& pointer, const char* what,
+                  const char* limit_name) {
+  if (count > limit)
+    invalid(pointer, std::to_string(count) + " " + what + " exceed the " + limit_name + " limit of " +
+                         std::to_string(limit) + " (§1.5)");
+}
+
 // Gives every id its byte-wise rank as vertex index.
 void set_vertices(Input& in, std::vector<std::string> ids) {
   std::sort(ids.begin(), ids.end());  // std::string compares bytes as unsigned char
@@ -107,6 +115,7 @@ void load_scenario(const Members& root, Input& in) {
 
   Ref fence = root.need("fence");
   expect_array(fence, "/fence", 3);
+  within_limit(fence.size(), json::kMaxSensors, "/fence", "sensors", "sensor");
   for (std::size_t i = 0; i < fence.size(); ++i) {
     std::string p = at("/fence", i);
     Members f(fence[i], p, {"id", "at", "radius"});
@@ -120,6 +129,7 @@ void load_scenario(const Members& root, Input& in) {
   }
   Ref sensors = root.need("sensors");
   expect_array(sensors, "/sensors", 0);
+  within_limit(fence.size() + sensors.size(), json::kMaxSensors, "/sensors", "sensors (fence included)", "sensor");
   for (std::size_t i = 0; i < sensors.size(); ++i) {
     std::string p = at("/sensors", i);
     Members f(sensors[i], p, {"id", "radius", "track"});
@@ -161,6 +171,7 @@ void load_contact_log(const Members& root, Input& in) {
   StringIndex ids;
   Ref fence = root.need("fence");
   expect_array(fence, "/fence", 3);
+  within_limit(fence.size(), json::kMaxSensors, "/fence", "sensor ids", "sensor");
   const std::size_t fence_size = fence.size();
   auto first_use = [&](std::uint32_t n) {  // the pointer of a declared id
     return n < fence_size ? at("/fence", n) : at("/sensors", n - fence_size);
@@ -173,6 +184,7 @@ void load_contact_log(const Members& root, Input& in) {
   auto sensors = root.get("sensors");
   if (sensors) {
     expect_array(*sensors, "/sensors", 0);
+    within_limit(fence_size + sensors->size(), json::kMaxSensors, "/sensors", "sensor ids (fence included)", "sensor");
     for (std::size_t i = 0; i < sensors->size(); ++i) {
       std::string_view id = get_id((*sensors)[i], at("/sensors", i));
       auto [n, fresh] = ids.insert(id);
@@ -199,6 +211,7 @@ void load_contact_log(const Members& root, Input& in) {
   // log may hold millions of pairs.
   Ref frames = root.need("frames");
   expect_array(frames, "/frames", 1);
+  within_limit(frames.size(), json::kMaxFrames, "/frames", "frames", "frame");
   std::vector<std::size_t> pair_counts, triple_counts;
   std::vector<std::uint32_t> uses;
   auto use = [&](Ref v, const std::string& list, std::size_t i, std::size_t j) {
@@ -207,6 +220,7 @@ void load_contact_log(const Members& root, Input& in) {
     const std::uint32_t n = sensors ? ids.find(id) : ids.insert(id).first;
     if (n == StringIndex::kNone)
       invalid(at(at(list, i), j), "unknown id " + id_text(id) + ": neither a fence id nor listed in /sensors (§2.2)");
+    if (n >= json::kMaxSensors) within_limit(std::size_t(n) + 1, json::kMaxSensors, at(at(list, i), j), "sensor ids", "sensor");
     uses.push_back(n);
   };
   auto tuples = [&](Ref list, const std::string& pointer, std::size_t length) {

@@ -1,5 +1,7 @@
 #include "json_reader.hpp"
 
+#include <sys/stat.h>
+
 #include <algorithm>
 #include <fstream>
 #include <limits>
@@ -98,15 +100,15 @@ class Builder {
   bool number_integer(number_integer_t v) { return integer(static_cast<std::uint64_t>(v), Kind::Signed); }
   bool number_unsigned(number_unsigned_t v) { return integer(v, Kind::Unsigned); }
   bool number_float(number_float_t, const string_t& raw) {
-    if (raw.size() > kMaxTextLength) return fail("number longer than 1000 characters (limit §1.5)");
+    if (raw.size() > kMaxTextLength) return fail(too_long("number", raw.size()));
     return text_node(raw, Kind::Float, false);
   }
   bool string(string_t& s) {
-    if (s.size() > kMaxTextLength) return fail("string longer than 1000 characters (limit §1.5)");
+    if (s.size() > kMaxTextLength) return fail(too_long("string", s.size()));
     return text_node(s, Kind::String, false);
   }
   bool key(string_t& s) {
-    if (s.size() > kMaxTextLength) return fail("key longer than 1000 characters (limit §1.5)");
+    if (s.size() > kMaxTextLength) return fail(too_long("key", s.size()));
     return text_node(s, Kind::String, true);
   }
   bool binary(binary_t&) { return fail("binary values are not JSON"); }
@@ -114,11 +116,26 @@ class Builder {
   bool start_array(std::size_t) { return open(); }
   bool end_object() { return close(Kind::Object); }
   bool end_array() { return close(Kind::Array); }
-  bool parse_error(std::size_t position, const std::string&, const nlohmann::detail::exception& ex) {
-    return fail("bad JSON near byte " + std::to_string(position) + ": " + ex.what());
+  bool parse_error(std::size_t position, const std::string& last_token, const nlohmann::detail::exception& ex) {
+    // nlohmann counts the characters read, the offending one included.
+    error_offset = position == 0 ? 0 : position - 1;
+    // A token over the length limit is refused for that (nlohmann fails on a long integer as
+    // an overflow), and never quoted whole.
+    if (last_token.size() > kMaxTextLength) return fail(too_long("token", last_token.size()));
+    // nlohmann's message starts with its own prefix and position, which we replace by ours.
+    std::string what = ex.what();
+    const std::size_t cut = what.find(": ");
+    if (what.rfind("[json.exception.", 0) == 0 && cut != std::string::npos) what = what.substr(cut + 2);
+    if (what.size() > 2 * kMaxTextLength) what = what.substr(0, 2 * kMaxTextLength) + "...";
+    return fail("bad JSON: " + what);
   }
+  std::size_t error_offset = std::string::npos;  // set for syntax errors only
 
  private:
+  static std::string too_long(const char* what, std::size_t length) {
+    return std::string(what) + " of " + std::to_string(length) + " characters exceeds the length limit of " +
+           std::to_string(kMaxTextLength) + " (§1.5)";
+  }
   bool fail(std::string why) {
     if (error.empty()) error = std::move(why);
     return false;
@@ -146,7 +163,8 @@ class Builder {
     return place(index);
   }
   bool open() {
-    if (depth_.size() >= kMaxDepth) return fail("nested deeper than 64 (limit §1.5)");
+    if (depth_.size() >= kMaxDepth)
+      return fail("nested deeper than the depth limit of " + std::to_string(kMaxDepth) + " (§1.5)");
     depth_.push_back(pending_.size());
     return true;
   }
@@ -167,29 +185,42 @@ class Builder {
 };
 
 std::string read_file(const std::string& path, const std::string& label) {
-  // Read in chunks rather than trusting a size from stat: pipes have none, and the limit must
-  // hold whatever the file claims.
+  const std::string name = label + " " + path;
+  auto too_large = [&](const std::string& size) {
+    return Unreadable(name + ": file of " + size + " bytes exceeds the file size limit of 1 GiB (" +
+                      std::to_string(kMaxFileBytes) + " bytes, §1.5)");
+  };
+  // A regular file's size decides before anything is read (a sparse 2 GiB file costs nothing).
+  struct stat st {};
+  const bool regular = ::stat(path.c_str(), &st) == 0 && S_ISREG(st.st_mode);
+  if (regular && std::uint64_t(st.st_size) > kMaxFileBytes) throw too_large(std::to_string(st.st_size));
   std::ifstream in(path, std::ios::binary);
-  if (!in) throw Unreadable(label + " " + path + ": cannot open file");
+  if (!in) throw Unreadable(name + ": cannot open file");
   std::string bytes;
-  // A regular file's size saves regrowing the buffer; the limit is enforced on what is read.
-  in.seekg(0, std::ios::end);
-  const std::streamoff size = in.tellg();
-  in.seekg(0, std::ios::beg);
-  in.clear();
-  if (size > 0 && std::uint64_t(size) <= kMaxFileBytes) bytes.reserve(static_cast<std::size_t>(size));
+  if (regular) bytes.reserve(static_cast<std::size_t>(st.st_size));
+  // Read in chunks whatever stat said: a pipe has no size, and a file may grow meanwhile.
   std::vector<char> chunk(std::size_t(1) << 20);
   while (in) {
     in.read(chunk.data(), static_cast<std::streamsize>(chunk.size()));
     bytes.append(chunk.data(), static_cast<std::size_t>(in.gcount()));
-    if (bytes.size() > kMaxFileBytes) throw Unreadable(label + " " + path + ": file larger than 1 GiB (limit §1.5)");
+    if (bytes.size() > kMaxFileBytes) throw too_large("more than " + std::to_string(kMaxFileBytes));
   }
-  if (in.bad()) throw Unreadable(label + " " + path + ": read error");
+  if (in.bad()) throw Unreadable(name + ": read error");
   return bytes;
 }
 
+std::string line_column(std::string_view bytes, std::size_t pos) {
+  pos = std::min(pos, bytes.size());
+  const std::string_view before = bytes.substr(0, pos);
+  const std::size_t line = 1 + static_cast<std::size_t>(std::count(before.begin(), before.end(), '\n'));
+  const std::size_t last_newline = before.rfind('\n');
+  const std::size_t column = last_newline == std::string_view::npos ? pos + 1 : pos - last_newline;
+  return "line " + std::to_string(line) + ", column " + std::to_string(column);
+}
+
 Document parse(std::string_view bytes, const std::string& label) {
-  if (bytes.size() > kMaxFileBytes) throw Unreadable(label + ": larger than 1 GiB (limit §1.5)");
+  if (bytes.size() > kMaxFileBytes)
+    throw Unreadable(label + ": " + std::to_string(bytes.size()) + " bytes exceed the file size limit of 1 GiB (§1.5)");
   Document doc;
   // A guess that saves regrowing (and copying) the large arrays: one value per 4 bytes, about
   // what rows of short ids hold. Capacity never touched costs no memory.
@@ -203,8 +234,10 @@ Document parse(std::string_view bytes, const std::string& label) {
   } catch (const std::exception& e) {
     throw Unreadable(label + ": cannot read JSON: " + e.what());
   }
-  if (!ok || !builder.error.empty())
-    throw Unreadable(label + ": " + (builder.error.empty() ? std::string("bad JSON") : builder.error));
+  if (!ok || !builder.error.empty()) {
+    std::string where = builder.error_offset == std::string::npos ? "" : line_column(bytes, builder.error_offset) + ": ";
+    throw Unreadable(label + ": " + where + (builder.error.empty() ? std::string("bad JSON") : builder.error));
+  }
   return doc;
 }
 

@@ -14,9 +14,14 @@
 
 namespace sweepcheck::json {
 
-constexpr std::uint64_t kMaxFileBytes = std::uint64_t(1) << 30;  // §1.5: 1 GiB
-constexpr std::size_t kMaxDepth = 64;                             // §1.5
-constexpr std::size_t kMaxTextLength = 1000;                      // §1.5: strings and numbers
+// The limits of schema/README.md §1.5. The count limits are enforced by the validators
+// (input.cpp, certificate.cpp) on the sizes of the parsed arrays.
+constexpr std::uint64_t kMaxFileBytes = std::uint64_t(1) << 30;  // file size: 1 GiB
+constexpr std::size_t kMaxDepth = 64;                             // nesting depth
+constexpr std::size_t kMaxTextLength = 1000;                      // strings, keys and numbers
+constexpr std::size_t kMaxSensors = 1000000;                      // sensor ids of an input
+constexpr std::size_t kMaxFrames = 1000000;                       // frames of a log or certificate
+constexpr std::size_t kMaxItems = 100000000;                      // rows and tree tokens of a certificate
 
 enum class Kind : std::uint8_t {
   Null, Boolean,
@@ -73,13 +78,19 @@ class Document {
   std::uint32_t root_ = 0;
 };
 
-// Reads a whole file, refusing files over kMaxFileBytes. Throws Unreadable naming `label`.
+// Reads a whole file, refusing files over kMaxFileBytes: a regular file by its size (stat)
+// before reading a byte, anything else (a pipe) as soon as more has been read. Throws
+// Unreadable naming `label`.
 std::string read_file(const std::string& path, const std::string& label);
 
 // Parses one JSON document (nothing may follow it). Throws Unreadable naming `label` on bad
-// JSON, a value nested deeper than kMaxDepth, or a string, key or number longer than
-// kMaxTextLength.
+// JSON (with the line and column of the offending character), a value nested deeper than
+// kMaxDepth, or a string, key or number longer than kMaxTextLength.
 Document parse(std::string_view bytes, const std::string& label);
+
+// "line L, column C" of the byte at offset `pos` (0-based) of `bytes`; lines are split at
+// '\n' and columns count bytes from 1.
+std::string line_column(std::string_view bytes, std::size_t pos);
 
 // RFC 6901 escaping of one reference token: '~' -> "~0", '/' -> "~1".
 std::string pointer_token(std::string_view key);

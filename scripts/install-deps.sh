@@ -2,7 +2,8 @@
 # Installs everything sweepcert needs to build and test, from Debian 12 packages (run as root).
 set -euo pipefail
 packages=(g++ cmake make python3 time libgmp-dev libboost-dev nlohmann-json3-dev catch2 libssl-dev
-          libgudhi-dev libcgal-dev libeigen3-dev)
+          libgudhi-dev libcgal-dev libeigen3-dev
+          clang libclang-rt-14-dev)  # libFuzzer and the sanitizer runtimes for scripts/fuzz.sh
 missing=()
 for p in "${packages[@]}"; do
   dpkg-query -W -f='${Status}' "$p" 2>/dev/null | grep -q "install ok installed" || missing+=("$p")

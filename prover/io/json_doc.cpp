@@ -10,10 +10,12 @@ namespace {
 constexpr std::size_t kMaxDepth = 64;
 constexpr std::size_t kMaxText = 1000;
 
+// `pos` counts the characters nlohmann read, the offending one included (one past the end at
+// end of input): the offending character is at offset pos - 1.
 std::string line_column(const std::string& bytes, std::size_t pos) {
-  pos = std::min(pos, bytes.size());
+  const std::size_t offset = std::min(pos == 0 ? 0 : pos - 1, bytes.size());
   std::size_t line = 1, col = 1;
-  for (std::size_t i = 0; i + 1 < pos; ++i) {
+  for (std::size_t i = 0; i < offset; ++i) {
     if (bytes[i] == '\n') { ++line; col = 1; } else { ++col; }
   }
   return "line " + std::to_string(line) + ", column " + std::to_string(col);
@@ -41,7 +43,7 @@ class JsonBuilder {
   bool number_unsigned(json::number_unsigned_t v) { return number(std::to_string(v)); }
   bool number_float(json::number_float_t, const std::string& raw) { return number(raw); }
   bool string(std::string& s) {
-    if (s.size() > kMaxText) return error("a string is longer than 1000 characters");
+    if (s.size() > kMaxText) return error(too_long("a string", s.size()));
     if (!leaf(JKind::String)) return false;
     set_text(doc_.nodes_.back(), s);
     return true;
@@ -52,16 +54,26 @@ class JsonBuilder {
   bool start_array(std::size_t) { return open(JKind::Array); }
   bool end_array() { return close(); }
   bool key(std::string& k) {
+    if (k.size() > kMaxText) return error(too_long("a key", k.size()));
     auto& keys = keys_.back();
     if (!keys.insert(k).second) return error("duplicate key \"" + k + "\"");
     pending_key_ = k;
     level_key_.back() = k;
     return true;
   }
-  bool parse_error(std::size_t pos, const std::string&, const nlohmann::detail::exception& ex) {
+  bool parse_error(std::size_t pos, const std::string& last_token, const nlohmann::detail::exception& ex) {
+    where_ = line_column(bytes_, pos);
+    // A token over the length limit is refused for that (nlohmann fails on a long integer as
+    // an overflow), and never quoted whole.
+    if (last_token.size() > kMaxText) {
+      what_ = too_long("a token", last_token.size());
+      return false;
+    }
     std::string what = ex.what();
     if (auto p = what.find("syntax error"); p != std::string::npos) what = what.substr(p);
-    where_ = line_column(bytes_, pos);
+    else if (auto q = what.find("] "); what.rfind("[json.exception.", 0) == 0 && q != std::string::npos)
+      what = what.substr(q + 2);
+    if (what.size() > 2 * kMaxText) what = what.substr(0, 2 * kMaxText) + "...";
     what_ = "malformed JSON: " + what;
     return false;
   }
@@ -69,6 +81,10 @@ class JsonBuilder {
   std::string where_, what_;
 
  private:
+  static std::string too_long(const char* what, std::size_t length) {
+    return std::string(what) + " of " + std::to_string(length) + " characters exceeds the length limit of " +
+           std::to_string(kMaxText) + " (schema §1.5)";
+  }
   bool error(std::string what) {
     where_ = current_pointer();
     what_ = std::move(what);
@@ -80,8 +96,10 @@ class JsonBuilder {
     for (std::size_t level = 0; level < open_.size(); ++level) {
       const JNode& n = doc_.nodes_[open_[level]];
       out += '/';
+      // An open container below this level is already its last child; the value being read
+      // at the innermost level is not yet a child.
       if (n.kind == JKind::Object) escape_token(out, level_key_[level]);
-      else out += std::to_string(n.count);
+      else out += std::to_string(level + 1 < open_.size() ? n.count - 1 : n.count);
     }
     return out.empty() ? "/" : out;
   }
@@ -91,7 +109,7 @@ class JsonBuilder {
     doc_.arena_.append(s);
   }
   bool number(const std::string& raw) {
-    if (raw.size() > kMaxText) return error("a number is longer than 1000 characters");
+    if (raw.size() > kMaxText) return error(too_long("a number", raw.size()));
     if (!leaf(JKind::Number)) return false;
     set_text(doc_.nodes_.back(), raw);
     return true;
@@ -118,7 +136,8 @@ class JsonBuilder {
     return true;
   }
   bool open(JKind kind) {
-    if (open_.size() >= kMaxDepth) return error("nesting deeper than 64 levels");
+    if (open_.size() >= kMaxDepth)
+      return error("nesting deeper than the depth limit of " + std::to_string(kMaxDepth) + " levels (schema §1.5)");
     if (!leaf(kind)) return false;
     open_.push_back(static_cast<std::uint32_t>(doc_.nodes_.size() - 1));
     last_child_.push_back(UINT32_MAX);

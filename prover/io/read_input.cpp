@@ -1,6 +1,7 @@
 #include "io/read_input.hpp"
 
 #include <openssl/evp.h>
+#include <sys/stat.h>
 
 #include <algorithm>
 #include <cstdio>
@@ -15,7 +16,18 @@
 namespace sweepcert {
 namespace {
 
-constexpr std::uintmax_t kMaxFileBytes = std::uintmax_t(1) << 30;
+// Limits of schema §1.5 (depth and text length are JsonDoc's).
+constexpr std::uintmax_t kMaxFileBytes = std::uintmax_t(1) << 30;  // file size: 1 GiB
+constexpr std::size_t kMaxSensors = 1000000;                       // sensor ids of an input
+constexpr std::size_t kMaxFrames = 1000000;                        // frames of a contact log
+
+// Refuses an array of more than `limit` items before any is read.
+void within_limit(const Ref& array, std::size_t count, std::size_t limit, const char* what,
+                  const char* limit_name) {
+  if (count > limit)
+    array.fail(std::to_string(count) + " " + what + " exceed the " + limit_name + " limit of " +
+               std::to_string(limit) + " (schema §1.5)");
+}
 
 std::string format_of(const JsonDoc& doc) {
   Ref root(doc);
@@ -64,15 +76,27 @@ void check_simple_polygon(const Sweep& s, const Ref& fence) {
 }  // namespace
 
 std::string read_bytes(const std::string& path) {
+  auto too_large = [&](const std::string& size) {
+    return InputError(path, "file of " + size + " bytes exceeds the file size limit of 1 GiB (" +
+                                std::to_string(kMaxFileBytes) + " bytes, schema §1.5)");
+  };
+  // A regular file's size (stat) decides before a byte is read; anything else (a pipe) is read
+  // in chunks up to the limit.
+  struct stat st {};
+  const bool regular = ::stat(path.c_str(), &st) == 0 && S_ISREG(st.st_mode);
+  if (regular && static_cast<std::uintmax_t>(st.st_size) > kMaxFileBytes)
+    throw too_large(std::to_string(st.st_size));
   std::ifstream in(path, std::ios::binary);
   if (!in) throw InputError(path, "cannot open file");
-  in.seekg(0, std::ios::end);
-  auto size = static_cast<std::uintmax_t>(in.tellg());
-  if (size > kMaxFileBytes) throw InputError(path, "file larger than the 1 GiB limit");
-  in.seekg(0);
-  std::string bytes(static_cast<std::size_t>(size), '\0');
-  in.read(bytes.data(), static_cast<std::streamsize>(size));
-  if (!in) throw InputError(path, "cannot read file");
+  std::string bytes;
+  if (regular) bytes.reserve(static_cast<std::size_t>(st.st_size));
+  std::vector<char> chunk(std::size_t(1) << 20);
+  while (in) {
+    in.read(chunk.data(), static_cast<std::streamsize>(chunk.size()));
+    bytes.append(chunk.data(), static_cast<std::size_t>(in.gcount()));
+    if (bytes.size() > kMaxFileBytes) throw too_large("more than " + std::to_string(kMaxFileBytes));
+  }
+  if (in.bad()) throw InputError(path, "cannot read file");
   return bytes;
 }
 
@@ -139,7 +163,14 @@ Sweep scenario_from(const JsonDoc& doc) {
   };
 
   Ref fence = root.at("fence");
-  fence.expect_array(3);
+  std::size_t fence_count = fence.expect_array(3);
+  within_limit(fence, fence_count, kMaxSensors, "sensors", "sensor");
+  {
+    // Both lists count before any sensor is read.
+    Ref sensors = root.at("sensors");
+    within_limit(sensors, fence_count + sensors.expect_array(0), kMaxSensors, "sensors (fence included)",
+                 "sensor");
+  }
   fence.for_each([&](const Ref& f) {
     f.expect_object({"id", "at", "radius"}, {"id", "at", "radius"});
     Sensor sensor;
@@ -195,12 +226,13 @@ ContactLog contacts_from(const JsonDoc& doc) {
     log.ids.push_back(std::move(id));
   };
   Ref fence = root.at("fence");
-  fence.expect_array(3);
+  within_limit(fence, fence.expect_array(3), kMaxSensors, "sensor ids", "sensor");
   fence.for_each(add);
   log.fence_count = log.ids.size();
   bool closed_world = false;
   if (auto sensors = root.find("sensors")) {
-    sensors->expect_array(0);
+    within_limit(*sensors, log.fence_count + sensors->expect_array(0), kMaxSensors,
+                 "sensor ids (fence included)", "sensor");
     sensors->for_each(add);
     closed_world = true;
   }
@@ -209,6 +241,7 @@ ContactLog contacts_from(const JsonDoc& doc) {
     auto it = index.find(id);
     if (it != index.end()) return it->second;
     if (closed_world) r.fail("unknown sensor id \"" + id + "\" (not in fence or sensors)");
+    within_limit(r, log.ids.size() + 1, kMaxSensors, "sensor ids", "sensor");
     Vertex v = static_cast<Vertex>(log.ids.size());
     index.emplace(id, v);
     log.ids.push_back(std::move(id));
@@ -235,7 +268,7 @@ ContactLog contacts_from(const JsonDoc& doc) {
   }
 
   Ref frames = root.at("frames");
-  frames.expect_array(1);
+  within_limit(frames, frames.expect_array(1), kMaxFrames, "frames", "frame");
   frames.for_each([&](const Ref& fr) {
     if (log.triples_listed) fr.expect_object({"t", "pairs", "triples"}, {"t", "pairs", "triples"});
     else fr.expect_object({"t", "pairs"}, {"t", "pairs"});
@@ -304,13 +337,19 @@ Input read_input(const std::string& path) {
   Input in;
   in.path = path;
   in.sha256 = sha256_hex(bytes);
-  JsonDoc doc = JsonDoc::parse(bytes);
-  in.format = format_of(doc);
-  if (in.format == "sweepcert-scenario-1") in.content = scenario_from(doc);
-  else if (in.format == "sweepcert-contacts-1") in.content = contacts_from(doc);
-  else
-    throw InputError("/format", "unknown format \"" + in.format +
-                                    "\" (expected sweepcert-scenario-1 or sweepcert-contacts-1)");
+  try {
+    JsonDoc doc = JsonDoc::parse(bytes);
+    std::string().swap(bytes);
+    in.format = format_of(doc);
+    if (in.format == "sweepcert-scenario-1") in.content = scenario_from(doc);
+    else if (in.format == "sweepcert-contacts-1") in.content = contacts_from(doc);
+    else
+      throw InputError("/format", "unknown format \"" + in.format +
+                                      "\" (expected sweepcert-scenario-1 or sweepcert-contacts-1)");
+  } catch (const InputError& e) {
+    // Name the file as well as the place in it (a JSON pointer, or line and column).
+    throw InputError(path + ": " + e.where, e.what());
+  }
   return in;
 }
 

@@ -104,12 +104,12 @@ TEST_CASE("unreadable files and limits exit 2", "[input][json]") {
   std::string deep = std::string(65, '[') + std::string(65, ']');
   Run r = run(kLog, deep);
   CHECK(r.code == 2);
-  CHECK_THAT(r.err, Catch::Matchers::Contains("CERT: nested deeper than 64"));
+  CHECK_THAT(r.err, Catch::Matchers::Contains("CERT: nested deeper than the depth limit of 64"));
   std::string long_title = kLog;
   replace_all(long_title, R"("fence")", "\"title\": \"" + std::string(1001, 'x') + "\", \"fence\"");
   r = run(long_title, kCert);
   CHECK(r.code == 2);
-  CHECK_THAT(r.err, Catch::Matchers::Contains("INPUT: string longer than 1000 characters"));
+  CHECK_THAT(r.err, Catch::Matchers::Contains("INPUT: string of 1001 characters exceeds the length limit of 1000"));
   std::ostringstream out, err;
   CHECK(sweepcheck::check_files("/nonexistent/input.json", "/nonexistent/cert.json", out, err) == 2);
   CHECK_THAT(err.str(), Catch::Matchers::Contains("cannot open file"));

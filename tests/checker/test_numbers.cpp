@@ -102,6 +102,34 @@ TEST_CASE("JSON limits of §1.5 are unreadable", "[json]") {
   CHECK_THROWS_AS(json::parse("{\"a\":1", "T"), Unreadable);
 }
 
+namespace {
+std::string parse_error_of(const std::string& text) {
+  try {
+    json::parse(text, "T");
+  } catch (const Unreadable& e) {
+    return e.what();
+  }
+  return "";
+}
+}  // namespace
+
+TEST_CASE("limit messages name the limit; bad syntax names line and column", "[json]") {
+  using Catch::Matchers::Contains;
+  CHECK_THAT(parse_error_of(std::string(200000, '[')), Contains("depth limit of 64"));
+  CHECK_THAT(parse_error_of("[\"" + std::string(1001, 'a') + "\"]"), Contains("length limit of 1000"));
+  CHECK_THAT(parse_error_of("{\"" + std::string(1001, 'a') + "\": 1}"), Contains("length limit of 1000"));
+  // 2000 digits overflow nlohmann's integer and double: refused for the length, not quoted.
+  const std::string long_number = parse_error_of("[" + std::string(2000, '7') + "]");
+  CHECK_THAT(long_number, Contains("token of 2000 characters exceeds the length limit"));
+  CHECK(long_number.size() < 200);
+  CHECK_THAT(parse_error_of("{\n \"a\":\n  [12 3]}"), Contains("T: line 3, column 7: bad JSON: syntax error"));
+  CHECK_THAT(parse_error_of("{\"a\": 1,\n"), Contains("T: line 2, column 1: bad JSON"));
+  CHECK_THAT(parse_error_of(""), Contains("T: line 1, column 1: bad JSON"));
+  CHECK(json::line_column("ab\ncd", 4) == "line 2, column 2");
+  CHECK(json::line_column("ab\ncd", 2) == "line 1, column 3");  // the newline itself
+  CHECK(json::line_column("ab", 99) == "line 1, column 3");      // past the end
+}
+
 TEST_CASE("duplicated and unknown keys are found with their pointer", "[json]") {
   json::Document doc = json::parse(R"({"a": 1, "b": {"c": 2, "c": 3}, "a": 4})", "T");
   try {
