@@ -4,6 +4,7 @@
 
 #include <algorithm>
 #include <map>
+#include <tuple>
 
 #include "ref_internal.hpp"  // exact-number parsing (test code shared with the reference)
 
@@ -21,7 +22,18 @@ struct Sites {
   std::vector<std::pair<Ptr, int>> coef_rows;  // chain row and the position of its coefficient
 };
 
-Sites collect(const json& c) {
+Sites collect_sites(const json& c);
+
+// Operators only ever read sites of an original certificate, which lives as long as the
+// campaign: cache by address (a megabyte chamber tree has a quarter of a million tokens).
+const Sites& collect(const json& c) {
+  static std::map<const json*, Sites> cache;
+  auto it = cache.find(&c);
+  if (it == cache.end()) it = cache.emplace(&c, collect_sites(c)).first;
+  return it->second;
+}
+
+Sites collect_sites(const json& c) {
   Sites s;
   Ptr root;
   for (const char* f : {"format", "claim", "method", "ring", "input_format"})
@@ -115,7 +127,7 @@ std::optional<Mutant> set_at(const json& cert, const Ptr& p, json v, const char*
 // ---- list operators -------------------------------------------------------------------------
 
 std::optional<Mutant> drop_item(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   const Ptr* p = pick(s.at[kList], rng);
   if (!p || c[*p].empty()) return std::nullopt;
   json m = c;
@@ -126,7 +138,7 @@ std::optional<Mutant> drop_item(const json& c, const Context&, Rng& rng) {
 }
 
 std::optional<Mutant> duplicate_item(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   const Ptr* p = pick(s.at[kList], rng);
   if (!p || c[*p].empty()) return std::nullopt;
   json m = c;
@@ -138,7 +150,7 @@ std::optional<Mutant> duplicate_item(const json& c, const Context&, Rng& rng) {
 }
 
 std::optional<Mutant> swap_items(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   const Ptr* p = pick(s.at[kList], rng);
   if (!p || c[*p].size() < 2) return std::nullopt;
   json m = c;
@@ -150,7 +162,7 @@ std::optional<Mutant> swap_items(const json& c, const Context&, Rng& rng) {
 }
 
 std::optional<Mutant> shuffle_rows(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   const Ptr* p = pick(s.at[kRowList], rng);
   if (!p || c[*p].size() < 2) return std::nullopt;
   json m = c;
@@ -162,7 +174,7 @@ std::optional<Mutant> shuffle_rows(const json& c, const Context&, Rng& rng) {
 }
 
 std::optional<Mutant> reorder_frames(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   const Ptr* p = pick(s.at[kOrdered], rng);
   if (!p || c[*p].size() < 2) return std::nullopt;
   json m = c;
@@ -178,7 +190,7 @@ std::optional<Mutant> reorder_frames(const json& c, const Context&, Rng& rng) {
 // ---- number operators -----------------------------------------------------------------------
 
 std::optional<Mutant> integer_pm1(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   const Ptr* p = pick(s.at[kInteger], rng);
   if (!p) return std::nullopt;
   mpz_class z(c[*p].get<std::string>());
@@ -187,7 +199,7 @@ std::optional<Mutant> integer_pm1(const json& c, const Context&, Rng& rng) {
 }
 
 std::optional<Mutant> negate(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   const Ptr* p = rng() % 2 ? pick(s.at[kInteger], rng) : pick(s.at[kRational], rng);
   if (!p) return std::nullopt;
   std::string t = c[*p].get<std::string>();
@@ -195,7 +207,7 @@ std::optional<Mutant> negate(const json& c, const Context&, Rng& rng) {
 }
 
 std::optional<Mutant> digit(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   const Ptr* p = rng() % 2 ? pick(s.at[kInteger], rng) : pick(s.at[kRational], rng);
   if (!p) return std::nullopt;
   std::string t = c[*p].get<std::string>();
@@ -210,7 +222,7 @@ std::optional<Mutant> digit(const json& c, const Context&, Rng& rng) {
 }
 
 std::optional<Mutant> nudge(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   const Ptr* p = pick(s.at[kRational], rng);
   if (!p) return std::nullopt;
   static const char* deltas[] = {"1/1000", "-1/1000", "1/1000000", "-1/1000000", "1/3", "-1/7"};
@@ -219,7 +231,7 @@ std::optional<Mutant> nudge(const json& c, const Context&, Rng& rng) {
 }
 
 std::optional<Mutant> shift_time(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   bool index = rng() % 2 && !s.at[kIndex].empty();
   const Ptr* p = index ? pick(s.at[kIndex], rng) : pick(s.at[kTime], rng);
   if (!p) return std::nullopt;
@@ -233,7 +245,7 @@ std::optional<Mutant> shift_time(const json& c, const Context&, Rng& rng) {
 }
 
 std::optional<Mutant> equal_number(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   const Ptr* p = pick(s.at[kRational], rng);
   if (!p) return std::nullopt;
   mutref::Q q = value_of(c[*p]);
@@ -255,7 +267,7 @@ std::optional<Mutant> equal_number(const json& c, const Context&, Rng& rng) {
 }
 
 std::optional<Mutant> scale_all(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   if (s.coef_rows.empty() && !c.contains("winding") && !c.contains("fence_value")) return std::nullopt;
   long k = rng() % 2 ? -1 : 2;
   json m = c;
@@ -269,7 +281,7 @@ std::optional<Mutant> scale_all(const json& c, const Context&, Rng& rng) {
 // ---- id and cell operators ------------------------------------------------------------------
 
 std::optional<Mutant> reorient(const json& c, bool negate_too, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   std::vector<std::pair<Ptr, int>> rows;
   for (const auto& r : s.coef_rows)
     if (r.second >= 3) rows.push_back(r);  // rows with at least two ids
@@ -291,7 +303,7 @@ std::optional<Mutant> swap_ids(const json& c, const Context&, Rng& rng) { return
 std::optional<Mutant> swap_ids_negate(const json& c, const Context&, Rng& rng) { return reorient(c, true, rng); }
 
 std::optional<Mutant> replace_id(const json& c, const Context& ctx, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   const Ptr* p = pick(s.at[kId], rng);
   if (!p) return std::nullopt;
   std::string id = rng() % 8 == 0 ? std::string("ghost") : *pick(ctx.input_ids, rng);
@@ -301,7 +313,7 @@ std::optional<Mutant> replace_id(const json& c, const Context& ctx, Rng& rng) {
 // ---- chambers -------------------------------------------------------------------------------
 
 std::optional<Mutant> tree_token(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   const Ptr* p = pick(s.at[kToken], rng);
   if (!p) return std::nullopt;
   long table = static_cast<long>(c["sensors"].size());
@@ -351,6 +363,55 @@ std::optional<Mutant> swap_table(const json& c, const Context&, Rng& rng) {
   return done(m, "swap-table " + std::to_string(a) + "," + std::to_string(b));
 }
 
+// Splits a slab [a, b] at its midpoint into two slabs with the same tree: covered cells stay
+// covered at the midpoint and the live sets are unchanged, so still valid.
+std::optional<Mutant> split_slab(const json& c, const Context&, Rng& rng) {
+  if (!c.contains("slabs") || c["slabs"].empty()) return std::nullopt;
+  json m = c;
+  std::size_t j = below(rng, m["slabs"].size());
+  json first = m["slabs"][j], second = m["slabs"][j];
+  std::string mid = mutref::Q((value_of(first["t"][0]) + value_of(first["t"][1])) / 2).get_str();
+  first["t"][1] = mid;
+  second["t"][0] = mid;
+  m["slabs"][j] = first;
+  m["slabs"].insert(m["slabs"].begin() + static_cast<long>(j) + 1, second);
+  return done(m, "split-slab " + std::to_string(j));
+}
+
+// Adds the coboundary of a vertex at one frame to a cocycle: δφ stays 0 and φ(L_0) does not
+// change (the two fence edges at a fence vertex cancel in L_0), so still valid.
+std::optional<Mutant> add_coboundary(const json& c, const Context& ctx, Rng& rng) {
+  if (!c.contains("edges") || !c.contains("frames") || !ctx.input_text) return std::nullopt;
+  const mutref::Input& in = mutref::input_for(*ctx.input_text);
+  const mutref::Stack& st = mutref::stack_for(in, c["frames"], false);
+  const bool z2 = c["ring"] == "z2";
+  const int v = static_cast<int>(below(rng, in.ids.size()));
+  const std::size_t k = below(rng, st.frames()), n = st.frames() - 1;
+  // Values by canonical cell: ("e", k, a, b) with a < b by byte order, or ("v", k, v).
+  std::map<std::tuple<char, std::size_t, int, int>, mpz_class> phi;
+  for (const auto& r : c["edges"]) {
+    int a = in.index.at(r[1].get<std::string>()), b = in.index.at(r[2].get<std::string>());
+    mpz_class x(r[3].get<std::string>());
+    phi[{'e', r[0].get<std::size_t>(), std::min(a, b), std::max(a, b)}] += a < b ? x : mpz_class(-x);
+  }
+  for (const auto& r : c["verticals"]) phi[{'v', r[0].get<std::size_t>(), in.index.at(r[1].get<std::string>()), 0}] += mpz_class(r[2].get<std::string>());
+  for (int u = 0; u < st.V; ++u)
+    if (st.edge_at(k, u, v)) phi[{'e', k, std::min(u, v), std::max(u, v)}] += v > u ? 1 : -1;
+  if (k >= 1) phi[{'v', k - 1, v, 0}] += 1;
+  if (k < n) phi[{'v', k, v, 0}] -= 1;
+  json m = c;
+  m["edges"] = json::array();
+  m["verticals"] = json::array();
+  for (const auto& [cell, x] : phi) {
+    mpz_class y = z2 ? mpz_class(x % 2 != 0 ? 1 : 0) : x;
+    if (y == 0) continue;
+    const auto& [kind, kk, a, b] = cell;
+    if (kind == 'e') m["edges"].push_back({kk, in.ids[a], in.ids[b], y.get_str()});
+    else m["verticals"].push_back({kk, in.ids[a], y.get_str()});
+  }
+  return done(m, "add-coboundary " + in.ids[v] + " at frame " + std::to_string(k));
+}
+
 // ---- routes ---------------------------------------------------------------------------------
 
 // Inserts the exact midpoint row between two route rows: the same path, so still valid.
@@ -367,7 +428,7 @@ std::optional<Mutant> split_route(const json& c, const Context&, Rng& rng) {
 // ---- fields ---------------------------------------------------------------------------------
 
 std::optional<Mutant> change_field(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   const Ptr* p = pick(s.at[kField], rng);
   if (!p) return std::nullopt;
   static const std::map<std::string, std::vector<std::string>> values{
@@ -389,7 +450,7 @@ std::optional<Mutant> hash_digit(const json& c, const Context&, Rng& rng) {
 }
 
 std::optional<Mutant> retype(const json& c, const Context&, Rng& rng) {
-  Sites s = collect(c);
+  const Sites& s = collect(c);
   switch (rng() % 3) {
     case 0: {  // a rational with an integer value as a JSON integer: the same number (§1.1)
       std::vector<Ptr> whole;
@@ -469,7 +530,8 @@ const std::vector<NamedOperator>& operators() {
       {"tree-token", tree_token},     {"split-leaf", split_leaf},         {"swap-table", swap_table},
       {"split-route", split_route},   {"change-field", change_field},     {"hash-digit", hash_digit},
       {"retype", retype},             {"drop-key", drop_key},             {"add-key", add_key},
-      {"notes", notes},               {"duplicate-key", duplicate_key}};
+      {"notes", notes},               {"duplicate-key", duplicate_key},   {"split-slab", split_slab},
+      {"add-coboundary", add_coboundary}};
   return table;
 }
 

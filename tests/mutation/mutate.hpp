@@ -22,6 +22,7 @@ struct Mutant {
 
 struct Context {
   std::vector<std::string> input_ids;  // every sensor id of the input
+  const std::string* input_text = nullptr;
 };
 
 using Rng = std::mt19937_64;

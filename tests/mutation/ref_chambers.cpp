@@ -11,6 +11,8 @@
 #include <cstdint>
 #include <map>
 #include <optional>
+#include <string>
+#include <unordered_set>
 
 #include "ref_internal.hpp"
 
@@ -158,8 +160,16 @@ void verify_chambers(const Input& in, const json& cert) {
       for (const Q& w : in.waypoint_times(s))
         if (a < w && w < b) at.push_back(in.centre(s, w));
     }
+    // Verdicts already proved for the same input, square, slab times, box and sensor are
+    // remembered (only successes; a failure refuses at once). Mutants repeat most cells.
+    static std::unordered_set<std::string> proved;
+    const std::string slab_key = in.sha256 + "|" + ox.get_str() + "," + oy.get_str() + "," + side.get_str() + "|" +
+                                 a.get_str() + "," + b.get_str() + "|";
     for (const Cell& c : cells[j]) {
       if (c.token == -2) continue;
+      std::string key = slab_key + std::to_string(c.depth) + "," + std::to_string(c.x) + "," + std::to_string(c.y) + "," +
+                        (c.token >= 0 ? in.ids[sensor[c.token]] : std::string("outside"));
+      if (proved.count(key)) continue;
       Q h = side / Q(Z(1) << c.depth);
       Q x0 = ox + h * Q(Z(static_cast<long>(c.x))), y0 = oy + h * Q(Z(static_cast<long>(c.y)));
       Q x1 = x0 + h, y1 = y0 + h;
@@ -180,6 +190,7 @@ void verify_chambers(const Input& in, const json& cert) {
         Point centre{(x0 + x1) / 2, (y0 + y1) / 2};
         if (locate(in, centre) != Where::outside) refuse("/slabs/" + std::to_string(j) + ": an outside cell is inside P");
       }
+      proved.insert(std::move(key));
     }
   }
 
