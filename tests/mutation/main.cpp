@@ -6,6 +6,7 @@
 // sampled mutant the checker rejected.
 //
 // Environment: SWEEPCERT_MUTATIONS (total mutants; default MUTATION_DEFAULT),
+// SWEEPCERT_MUTATIONS_PER_CERT (floor per certificate; default MUTATION_MIN_PER_CERT),
 // SWEEPCERT_MUTATION_SEED, SWEEPCERT_REFERENCE_SAMPLE (check one rejected mutant in N with the
 // reference; default 4).
 #include <chrono>
@@ -145,6 +146,7 @@ int main() {
   const long total = env_long("SWEEPCERT_MUTATIONS", MUTATION_DEFAULT);
   const long seed = env_long("SWEEPCERT_MUTATION_SEED", 20261201);
   const long sample_every = std::max(1L, env_long("SWEEPCERT_REFERENCE_SAMPLE", 4));
+  const int timing_runs = MUTATION_MIN_PER_CERT >= 12 ? 3 : 1;
   int failures = 0;
 
   std::vector<Cert> certs;
@@ -165,7 +167,7 @@ int main() {
     std::ostringstream out, err;
     int code = 0;
     double ms = 1e9;
-    for (int r = 0; r < 3; ++r) {  // the fastest of three runs estimates the cost of a mutant
+    for (int r = 0; r < timing_runs; ++r) {  // the fastest run estimates the cost of a mutant
       std::ostringstream o, e;
       auto t0 = clock::now();
       code = sweepcheck::check_texts(c.input_text, c.text, r == 0 ? out : o, r == 0 ? err : e);
@@ -198,16 +200,17 @@ int main() {
   std::map<std::string, Tally> by_kind, by_op;
   long sampled = 0, sample_refused = 0, wrong_shown = 0, lax_shown = 0, skipped = 0;
   std::map<std::string, long> lax_by_op;
+  std::map<std::string, std::pair<long, long>> sample_by_kind;  // sampled, refused by the reference
   double checker_seconds = 0, reference_seconds = 0;
   const auto loop_start = clock::now();
-  // Mutants per certificate: proportional to 1/sqrt(cost), at least kMinPerCert, so cheap
+  // Mutants per certificate: proportional to 1/sqrt(cost), at least min_per_cert, so cheap
   // certificates get many mutants and the megabyte ones still get some.
-  constexpr long kMinPerCert = 12;
+  const long min_per_cert = env_long("SWEEPCERT_MUTATIONS_PER_CERT", MUTATION_MIN_PER_CERT);
   std::vector<long> quota(certs.size());
   double weight_sum = 0;
   for (const Cert& c : certs) weight_sum += 1 / std::sqrt(std::max(1.0, c.cost_ms));
   for (std::size_t k = 0; k < certs.size(); ++k)
-    quota[k] = std::max(kMinPerCert, static_cast<long>(std::ceil(total / std::sqrt(std::max(1.0, certs[k].cost_ms)) / weight_sum)));
+    quota[k] = std::max(min_per_cert, static_cast<long>(std::ceil(total / std::sqrt(std::max(1.0, certs[k].cost_ms)) / weight_sum)));
   std::vector<std::size_t> schedule;
   for (std::size_t k = 0; k < certs.size(); ++k) schedule.insert(schedule.end(), quota[k], k);
   std::cout << "mutants per certificate:";
@@ -243,9 +246,11 @@ int main() {
       ++tk.rejected, ++to.rejected;
       if (static_cast<long>(i) % sample_every == 0) {
         ++sampled;
+        ++sample_by_kind[c.kind].first;
         mutref::Verdict v = mutref::verify(c.input_text, m->text, quick);
         if (!v.ok) {
           ++sample_refused;
+          ++sample_by_kind[c.kind].second;
         } else {
           ++lax_by_op[ops[op].name];
           if (lax_shown++ < 8)
@@ -276,6 +281,8 @@ int main() {
   const double seconds = std::chrono::duration<double>(clock::now() - start).count();
   std::cout << "\nreference on the originals: " << certs.size() << " of " << certs.size() << " accepted\n"
             << "reference on sampled rejected mutants: refused " << sample_refused << " of " << sampled << "\n";
+  for (const auto& [kind, n] : sample_by_kind)
+    std::cout << "  " << std::left << std::setw(16) << kind << std::right << " refused " << n.second << " of " << n.first << "\n";
   for (const auto& [op, n] : lax_by_op) std::cout << "  accepted by the reference after " << op << ": " << n << "\n";
   std::cout << "time: proving " << std::setprecision(1) << prove_seconds << " s, mutation loop "
             << std::chrono::duration<double>(clock::now() - loop_start).count() << " s (checker " << checker_seconds
