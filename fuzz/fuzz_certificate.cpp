@@ -39,13 +39,15 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
     const json::Document input_doc = json::parse(parts.input, "INPUT");
     std::unique_ptr<Input> in = load_input(input_doc);
     const json::Document cert_doc = json::parse(parts.cert, "CERT");
-    Certificate cert = read_header(cert_doc.root(), *in, claimed_hash(cert_doc.root()), out);
-    if (cert.method == "chambers") check_chambers(cert, *in, out);
-    else if (cert.method == "route") check_route(cert, *in, out);
+    Tally tally;
+    Certificate cert = read_header(cert_doc.root(), *in, claimed_hash(cert_doc.root()), out, tally);
+    apply_margin(cert, *in, out, tally);
+    if (cert.method == "chambers") check_chambers(cert, *in, out, tally);
+    else if (cert.method == "route") check_route(cert, *in, out, tally);
     else {
       Stack stack(*in, cert.frames, cert.log_start);
-      if (cert.method == "sheet") check_sheet(cert, stack, out);
-      else check_cocycle(cert, stack, out);
+      if (cert.method == "sheet") check_sheet(cert, stack, out, tally);
+      else check_cocycle(cert, stack, out, tally);
     }
   } catch (const Unreadable&) {
   } catch (const Rejected&) {
